@@ -1,0 +1,15 @@
+import type { DataSource } from 'typeorm';
+import type { Logger } from 'pino';
+import type { Config } from './config';
+import type { Mailer } from './mail/mailer';
+
+/** What every handler may use; built once per app (one per test file in tests). */
+export interface AppContext {
+  ds: DataSource;
+  config: Config;
+  mailer: Mailer;
+  log: Logger;
+  jwtSecret: string;
+  /** Base of links in e-mail: PUBLIC_URL, or the address the server listens on. */
+  publicUrl(): string;
+}

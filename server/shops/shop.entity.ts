@@ -1,0 +1,13 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+
+@Entity('shop')
+export class Shop {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column('text')
+  name: string;
+
+  @CreateDateColumn({ type: 'datetime' })
+  createdAt: Date;
+}
