@@ -1,11 +1,14 @@
 import type { DataSource } from 'typeorm';
 import type { Logger } from 'pino';
 import type { Config } from './config';
+import type { Write } from './db/writer';
 import type { Mailer } from './mail/mailer';
 
 /** What every handler may use; built once per app (one per test file in tests). */
 export interface AppContext {
   ds: DataSource;
+  /** Runs a write transaction; all writes go through it (see db/writer.ts). */
+  write: Write;
   config: Config;
   mailer: Mailer;
   log: Logger;

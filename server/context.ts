@@ -5,6 +5,7 @@ import pino from 'pino';
 import type { DataSource } from 'typeorm';
 import type { AppContext } from './app-context';
 import type { Config } from './config';
+import { createWriter } from './db/writer';
 import { startFakeSmtp, type FakeSmtp } from './mail/fake-smtp';
 import { createMailer } from './mail/mailer';
 
@@ -19,11 +20,13 @@ export interface Runtime {
 /** Wires database, mail (the local fake unless SMTP_URL is set), logger and secret into one context. */
 export async function createRuntime(config: Config, ds: DataSource): Promise<Runtime> {
   const log = pino({ level: config.logLevel });
-  const fakeSmtp = config.smtpUrl ? null : await startFakeSmtp(ds);
+  const write = createWriter(ds);
+  const fakeSmtp = config.smtpUrl ? null : await startFakeSmtp(write);
   const mailer = createMailer(config.smtpUrl ?? fakeSmtp!.url, config.mailFrom);
   let listenUrl = `http://localhost:${config.port}`;
   const ctx: AppContext = {
     ds,
+    write,
     config,
     mailer,
     log,

@@ -52,7 +52,7 @@ export const authRoutes: RouteDef[] = [
       if (user) {
         const { token, hash } = newSecretToken();
         const expiresAt = new Date(Date.now() + RESET_TTL_MS);
-        await ctx.ds.getRepository(PasswordReset).save({ userId: user.id, tokenHash: hash, expiresAt, usedAt: null });
+        await ctx.write((tx) => tx.getRepository(PasswordReset).save({ userId: user.id, tokenHash: hash, expiresAt, usedAt: null }));
         const link = `${ctx.publicUrl()}/reset-password?token=${token}`;
         try {
           await ctx.mailer.send({ shopId: user.shopId, to: user.email, ...resetMail({ name: user.name, link, expiresAt }) });
@@ -73,7 +73,7 @@ export const authRoutes: RouteDef[] = [
     async handler(req, res, ctx) {
       const { token, password } = req.body as ResetPasswordInput;
       const passwordHash = await hashPassword(password);
-      await ctx.ds.transaction(async (tx) => {
+      await ctx.write(async (tx) => {
         const reset = await tx.getRepository(PasswordReset).findOne({
           where: { tokenHash: hashSecretToken(token), usedAt: IsNull(), expiresAt: MoreThan(new Date()) },
           relations: { user: true },

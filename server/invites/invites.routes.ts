@@ -64,7 +64,7 @@ export const inviteRoutes: RouteDef[] = [
       }
       const { token, hash } = newSecretToken();
       const expiresAt = new Date(Date.now() + INVITE_TTL_MS);
-      const invite = await ctx.ds.transaction(async (tx) => {
+      const invite = await ctx.write(async (tx) => {
         // A new invite to the same address replaces any pending one.
         await tx.getRepository(Invite).update({ shopId, email, acceptedAt: IsNull(), revokedAt: IsNull() }, { revokedAt: new Date() });
         return tx.getRepository(Invite).save({ shopId, email, role: role as Role, tokenHash: hash, invitedById: req.member.id, expiresAt, acceptedAt: null, revokedAt: null });
@@ -90,9 +90,9 @@ export const inviteRoutes: RouteDef[] = [
     summary: 'Revoke a pending invite; its link stops working.',
     roles: ['owner'],
     async handler(req, res, ctx) {
-      const result = await ctx.ds
-        .getRepository(Invite)
-        .update({ id: String(req.params.id), shopId: req.member.shopId, acceptedAt: IsNull(), revokedAt: IsNull() }, { revokedAt: new Date() });
+      const result = await ctx.write((tx) =>
+        tx.getRepository(Invite).update({ id: String(req.params.id), shopId: req.member.shopId, acceptedAt: IsNull(), revokedAt: IsNull() }, { revokedAt: new Date() }),
+      );
       if (!result.affected) throw notFound('pending invite');
       res.status(204).end();
     },
@@ -122,7 +122,7 @@ export const inviteRoutes: RouteDef[] = [
     async handler(req, res, ctx) {
       const { token, name, password } = req.body as AcceptInviteInput;
       const passwordHash = await hashPassword(password);
-      const user = await ctx.ds.transaction(async (tx) => {
+      const user = await ctx.write(async (tx) => {
         const invite = await tx.getRepository(Invite).findOne({ where: usable(hashSecretToken(token)) });
         if (!invite) throw invalidInvite();
         if (await tx.getRepository(User).existsBy({ email: invite.email })) {

@@ -1,7 +1,7 @@
 import type { AddressInfo } from 'node:net';
 import { simpleParser, type AddressObject } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
-import type { DataSource } from 'typeorm';
+import type { Write } from '../db/writer';
 import { MailMessage } from './mail-message.entity';
 import { SHOP_HEADER } from './mailer';
 
@@ -16,7 +16,7 @@ export interface FakeSmtp {
  * A local SMTP server on loopback that stores every message it receives in the
  * outbox table, so the demo and the tests work with no real mailbox.
  */
-export async function startFakeSmtp(ds: DataSource): Promise<FakeSmtp> {
+export async function startFakeSmtp(write: Write): Promise<FakeSmtp> {
   const server = new SMTPServer({
     secure: false,
     authOptional: true,
@@ -27,7 +27,7 @@ export async function startFakeSmtp(ds: DataSource): Promise<FakeSmtp> {
       simpleParser(stream)
         .then(async (parsed) => {
           const shopHeader = parsed.headers.get(SHOP_HEADER.toLowerCase());
-          await ds.getRepository(MailMessage).save({
+          await write((tx) => tx.getRepository(MailMessage).save({
             shopId: typeof shopHeader === 'string' ? shopHeader : null,
             fromAddress: addressText(parsed.from),
             toAddress: addressText(parsed.to),
@@ -39,7 +39,7 @@ export async function startFakeSmtp(ds: DataSource): Promise<FakeSmtp> {
               contentType: a.contentType,
               size: a.size,
             })),
-          });
+          }));
           callback();
         })
         .catch((err: Error) => callback(err));

@@ -24,7 +24,7 @@ export const memberRoutes: RouteDef[] = [
     body: updateMemberSchema,
     async handler(req, res, ctx) {
       const change = req.body as UpdateMemberInput;
-      const updated = await ctx.ds.transaction(async (tx) => {
+      const updated = await ctx.write(async (tx) => {
         const repo = tx.getRepository(User);
         const user = await repo.findOneBy({ id: String(req.params.id), shopId: req.member.shopId });
         if (!user) throw notFound('member');
