@@ -1,0 +1,1 @@
+export { SignedInShell as default } from '@/features/shell/signed-in-shell';

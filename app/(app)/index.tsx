@@ -1,0 +1,1 @@
+export { HomeRedirect as default } from '@/features/shell/home-redirect';

@@ -1,0 +1,1 @@
+export { MembersScreen as default } from '@/features/members/members-screen';

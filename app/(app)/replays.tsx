@@ -1,0 +1,1 @@
+export { ReplaysScreen as default } from '@/features/replays/replays-screen';

@@ -1,0 +1,83 @@
+import Svg, { Circle, Path, Rect } from 'react-native-svg';
+
+/** Probepath's line icons, drawn on a 24-unit grid with a 2-unit stroke. */
+const drawings = {
+  bench: (
+    <>
+      <Rect x={5} y={2.5} width={14} height={19} rx={2.5} />
+      <Rect x={8} y={5.5} width={8} height={5} rx={1} />
+      <Circle cx={12} cy={15.5} r={2.8} />
+    </>
+  ),
+  procedures: (
+    <>
+      <Circle cx={12} cy={5} r={2.5} />
+      <Circle cx={6} cy={19} r={2.5} />
+      <Rect x={15.5} y={16.5} width={5} height={5} rx={1} />
+      <Path d="M12 7.5V11M6 16.5V11h12v5.5" />
+    </>
+  ),
+  replays: (
+    <>
+      <Circle cx={12} cy={12} r={9} />
+      <Path d="M10 8.5l5.5 3.5-5.5 3.5z" />
+    </>
+  ),
+  members: (
+    <>
+      <Circle cx={9} cy={8} r={3.2} />
+      <Path d="M3 20c0-3.3 2.7-6 6-6s6 2.7 6 6" />
+      <Circle cx={17} cy={9} r={2.5} />
+      <Path d="M16.5 14.2c2.6.4 4.5 2.7 4.5 5.8" />
+    </>
+  ),
+  outbox: (
+    <>
+      <Rect x={3} y={5} width={18} height={14} rx={2} />
+      <Path d="M3.8 6.5L12 12.8l8.2-6.3" />
+    </>
+  ),
+  account: (
+    <>
+      <Circle cx={12} cy={8} r={4} />
+      <Path d="M4 21c0-4.4 3.6-8 8-8s8 3.6 8 8" />
+    </>
+  ),
+  signOut: <Path d="M10 4H5.5A1.5 1.5 0 0 0 4 5.5v13A1.5 1.5 0 0 0 5.5 20H10M15 8l4 4-4 4M19 12H9" />,
+  lock: (
+    <>
+      <Rect x={5} y={11} width={14} height={10} rx={2} />
+      <Path d="M8 11V7.5a4 4 0 0 1 8 0V11M12 15v2" />
+    </>
+  ),
+  unplugged: <Path d="M7 3v4M13 3v4M5 7h10v3a5 5 0 0 1-10 0zM10 15v2M16 19.5c1.5-1 3.5-1 5 0M10 20h2" />,
+  alert: <Path d="M12 3.5L21.5 20h-19zM12 10v4.5M12 17.5v.5" />,
+  check: <Path d="M5 12.5l4.5 4.5L19 7" />,
+  back: <Path d="M15 5l-7 7 7 7" />,
+  key: (
+    <>
+      <Circle cx={8} cy={14} r={4.5} />
+      <Path d="M11.2 10.8L20 2M16.5 5.5l2.5 2.5M14 8l2 2" />
+    </>
+  ),
+} as const;
+
+export type IconName = keyof typeof drawings;
+
+export function Icon({ name, size = 24, color }: { name: IconName; size?: number; color: string }) {
+  return (
+    <Svg
+      width={size}
+      height={size}
+      viewBox="0 0 24 24"
+      fill="none"
+      stroke={color}
+      strokeWidth={2}
+      strokeLinecap="round"
+      strokeLinejoin="round"
+      aria-hidden
+    >
+      {drawings[name]}
+    </Svg>
+  );
+}
