@@ -60,7 +60,7 @@ function mount(app: express.Express, ctx: AppContext, route: RouteDef, limits: {
   if (route.roles !== 'public') chain.push(authenticate(ctx, route.roles));
   if (route.body) chain.push(validateBody(route.body));
   chain.push(async (req, res) => {
-    await (route.roles === 'public' ? route.handler(req, res, ctx) : route.handler(req as AuthedRequest, res, ctx));
+    await route.handler(req as AuthedRequest, res, ctx);
   });
   app[route.method](route.path, ...chain);
 }

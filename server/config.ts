@@ -32,7 +32,7 @@ export interface Config {
 
 export class ConfigError extends Error {}
 
-export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
+export function readConfig(env: Record<string, string | undefined> = process.env): Config {
   const picked = Object.fromEntries(
     Object.keys(schema.fields).map((k) => [k, env[k] === '' ? undefined : env[k]]),
   );

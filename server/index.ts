@@ -41,7 +41,7 @@ async function main() {
       runtime.close().finally(() => process.exit(0));
     });
     server.closeIdleConnections();
-    setTimeout(() => process.exit(0), 5000).unref();
+    setTimeout(() => process.exit(0), 5000);
   };
   process.on('SIGTERM', () => shutdown('SIGTERM'));
   process.on('SIGINT', () => shutdown('SIGINT'));

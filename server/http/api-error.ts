@@ -5,6 +5,8 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
+    /** More that a client can act on, e.g. the problem list of a procedure that cannot be published. */
+    readonly details?: Record<string, unknown>,
   ) {
     super(message);
   }

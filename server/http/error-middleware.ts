@@ -17,9 +17,14 @@ export const errorMiddleware: ErrorRequestHandler = (err, req, res, _next) => {
   res.status(body.status).json({ error: body.error });
 };
 
-function toErrorBody(err: unknown): { status: number; error: { code: string; message: string; fields?: Record<string, string> } } {
+interface ErrorBody {
+  status: number;
+  error: { code: string; message: string; fields?: Record<string, string>; [more: string]: unknown };
+}
+
+function toErrorBody(err: unknown): ErrorBody {
   if (err instanceof ApiError) {
-    return { status: err.status, error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } };
+    return { status: err.status, error: { ...err.details, code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } };
   }
   if (err instanceof yup.ValidationError) {
     return { status: 400, error: { code: 'invalid_input', message: err.errors.join(' '), fields: fieldsOf(err) } };

@@ -11,27 +11,18 @@ export interface AuthedRequest extends Request {
   member: User;
 }
 
-interface BaseRoute {
+export interface RouteDef {
   method: Method;
   path: string;
   summary: string;
+  /** The roles allowed (every other role gets 403, no token 401), or 'public' for no sign-in. */
+  roles: readonly Role[] | 'public';
   /** Request body schema (the same yup schema the client form uses). */
   body?: yup.AnyObjectSchema;
   /** Stricter rate limit for endpoints that guess at secrets or send mail. */
   limited?: boolean;
-}
-
-export interface PublicRoute extends BaseRoute {
-  roles: 'public';
-  handler: (req: Request, res: Response, ctx: AppContext) => unknown;
-}
-
-export interface MemberRoute extends BaseRoute {
-  /** The roles allowed; every other role gets 403, no token 401. */
-  roles: readonly Role[];
+  /** `req.member` is set on every route but the public ones, which must not read it. */
   handler: (req: AuthedRequest, res: Response, ctx: AppContext) => unknown;
 }
-
-export type RouteDef = PublicRoute | MemberRoute;
 
 export const ALL_ROLES: readonly Role[] = ['owner', 'lead', 'tech', 'apprentice'];

@@ -1,4 +1,6 @@
 /** Every migration, in order. `npm run migration:generate -- <Name>` appends to this list. */
 import { Foundation1796214609795 } from './1796214609795-foundation';
+import { Workshop1796215191994 } from './1796215191994-workshop';
+import { PublishedVersionsImmutable1796215191995 } from './1796215191995-published-versions-immutable';
 
-export const migrations = [Foundation1796214609795];
+export const migrations = [Foundation1796214609795, Workshop1796215191994, PublishedVersionsImmutable1796215191995];

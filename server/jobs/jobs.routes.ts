@@ -1,0 +1,62 @@
+import { jobSchema, type JobInput } from '@shared/workshop/schemas';
+import type { JobView } from '@shared/api/workshop-types';
+import { ApiError, notFound } from '../http/api-error';
+import type { RouteDef } from '../http/route';
+import { Machine } from '../machines/machine.entity';
+import { toMachineView } from '../machines/machines.routes';
+import { Job } from './job.entity';
+
+const RUNNERS = ['owner', 'lead', 'tech'] as const;
+
+export const toJobView = (j: Job & { machine: Machine }): JobView => ({
+  id: j.id,
+  reference: j.reference,
+  customerName: j.customerName,
+  customerContact: j.customerContact,
+  customerEmail: j.customerEmail,
+  complaint: j.complaint,
+  machine: toMachineView(j.machine),
+  createdAt: j.createdAt.toISOString(),
+});
+
+export const jobRoutes: RouteDef[] = [
+  {
+    method: 'get',
+    path: '/api/jobs',
+    summary: "The shop's jobs with their machines, newest first.",
+    roles: RUNNERS,
+    async handler(req, res, ctx) {
+      const jobs = await ctx.ds.getRepository(Job).find({ where: { shopId: req.member.shopId }, relations: { machine: true }, order: { createdAt: 'DESC' }, take: 500 });
+      res.json({ jobs: jobs.map(toJobView) });
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/jobs',
+    summary: 'Open a job: customer, complaint in their words, machine.',
+    roles: RUNNERS,
+    body: jobSchema,
+    async handler(req, res, ctx) {
+      const input = req.body as JobInput;
+      const shopId = req.member.shopId;
+      const job = await ctx.write(async (tx) => {
+        const machine = await tx.getRepository(Machine).findOneBy({ id: input.machineId, shopId });
+        if (!machine) throw new ApiError(404, 'not_found', 'No machine with that id in your shop.', { machineId: 'Pick a machine of your shop.' });
+        const saved = await tx.getRepository(Job).save({ ...input, shopId });
+        return { ...saved, machine };
+      });
+      res.status(201).json({ job: toJobView(job) });
+    },
+  },
+  {
+    method: 'get',
+    path: '/api/jobs/:id',
+    summary: 'One job with its machine.',
+    roles: RUNNERS,
+    async handler(req, res, ctx) {
+      const j = await ctx.ds.getRepository(Job).findOne({ where: { id: String(req.params.id), shopId: req.member.shopId }, relations: { machine: true } });
+      if (!j) throw notFound('job');
+      res.json({ job: toJobView(j) });
+    },
+  },
+];

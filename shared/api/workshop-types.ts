@@ -1,0 +1,34 @@
+import type { MeterRange } from '../workshop/schemas';
+
+export interface MachineView {
+  id: string;
+  make: string;
+  model: string;
+  year: number;
+  engine: string;
+  vin: string;
+  mileage: number | null;
+  mileageUnit: 'km' | 'mi';
+  /** Set when the VIN's structure or North American check digit looks wrong; never blocks anything. */
+  vinWarning: string | null;
+  createdAt: string;
+}
+
+export interface JobView {
+  id: string;
+  reference: string;
+  customerName: string;
+  customerContact: string;
+  customerEmail: string;
+  complaint: string;
+  machine: MachineView;
+  createdAt: string;
+}
+
+export interface MeterView {
+  id: string;
+  name: string;
+  model: string;
+  ranges: MeterRange[];
+  createdAt: string;
+}
