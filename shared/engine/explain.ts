@@ -31,7 +31,8 @@ export function explainEvaluation(spec: Spec, evaluation: Evaluation, quantity: 
 
   const target = spec.kind === 'agree_with' ? agreementText(evaluation, fmt) : limitsText(limits.min, limits.max, fmt);
   if (compared === null) {
-    if (spec.kind === 'expect_open' || verdict === 'in_spec') return `OL (over range): meets ${target}.`;
+    if (spec.kind === 'expect_open') return 'OL: open, as expected.';
+    if (verdict === 'in_spec') return `OL (over range): meets ${target}.`;
     return verdict === 'open' ? `OL: open circuit against ${target}${corrected}.` : `Over range: above ${target}${corrected}.`;
   }
   if (spec.kind === 'expect_open') {

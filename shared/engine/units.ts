@@ -58,8 +58,9 @@ export function formatValue(si: number, quantity: Quantity, options: FormatOptio
     mantissa = scaleByPowerOfTen(si, -exponents[index]);
     text = mantissa.toPrecision(significant);
   }
-  // Past the largest prefix, show whole units rather than exponent notation.
-  if (Math.abs(Number(text)) >= 1000) text = Math.round(mantissa).toString();
+  // Past the largest prefix, show every integer digit rather than exponent notation.
+  const rounded = Math.abs(Number(text));
+  if (rounded >= 1000) text = mantissa.toPrecision(Math.max(significant, Math.floor(Math.log10(rounded)) + 1));
   return `${dropZeroFraction(text)} ${prefixSymbol(exponents[index])}${info.symbol}`;
 }
 

@@ -1,9 +1,10 @@
 import request from 'supertest';
-import type { Harness } from './api-harness';
+import type { Role } from '@shared/auth/roles';
+
 import { FIXTURE_METER, fixtureProcedure } from './fixture-procedure';
 
 /** A meter, a machine with a job, and the fixture procedure published as version 1. */
-export async function setUpWorkshop(h: Harness) {
+export async function setUpWorkshop(h: { app: Parameters<typeof request>[0]; tokenFor(role: Role): Promise<string> }) {
   const owner = await h.tokenFor('owner');
   const lead = await h.tokenFor('lead');
   const auth = (t: string) => ({ authorization: `Bearer ${t}` });
