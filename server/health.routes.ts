@@ -1,4 +1,6 @@
 import type { RouteDef } from './http/route';
+import { buildOpenApi } from './openapi';
+import { routeTable } from './route-table';
 
 export const healthRoutes: RouteDef[] = [
   {
@@ -9,6 +11,15 @@ export const healthRoutes: RouteDef[] = [
     async handler(_req, res, ctx) {
       await ctx.ds.query('SELECT 1');
       res.json({ status: 'ok' });
+    },
+  },
+  {
+    method: 'get',
+    path: '/api/openapi.json',
+    summary: 'This API described in OpenAPI 3.1, built from the route table.',
+    roles: 'public',
+    handler(_req, res) {
+      res.json(buildOpenApi(routeTable));
     },
   },
 ];
