@@ -290,18 +290,21 @@ function reportCycles(settled: Graph, checks: Check[], from: number[], to: numbe
     if (exit !== -1 && component[exit] === component[from[e]]) reentered[component[exit]] = 1;
   }
   for (const group of members) {
-    const v = group[0];
+    const v = group[0]; // members are in document order
     let selfLoop = false;
     for (let e = settled.offsets[v]; e < settled.offsets[v + 1]; e++) if (settled.targets[e] === v) selfLoop = true;
     if (group.length < 2 && !selfLoop) continue;
-    group.sort((a, b) => a - b);
     const names = group.slice(0, CYCLE_NAMES_SHOWN).map((i) => `“${checks[i].id}”`).join(', ');
     const more = group.length > CYCLE_NAMES_SHOWN ? ` and ${group.length - CYCLE_NAMES_SHOWN} more` : '';
+    if (selfLoop && group.length === 1 && reentered[component[v]] === 0) {
+      report(checks[v].id, 'cycle', `“${checks[v].id}” leads back to itself. Point the outcome at the next check, or add a re-test check in between.`);
+      continue;
+    }
     report(
       checks[group[0]].id,
       'cycle',
       reentered[component[v]] === 1
-        ? `Checks ${names}${more} loop forever: after the last re-test the diagnosis comes back into the loop. Point “when exhausted” at a check outside it.`
+        ? `The loop through ${names}${more} never ends: after the last re-test the diagnosis comes back into it. Point “when exhausted” at a check outside the loop.`
         : `Checks ${names}${more} form a loop with no limit. Mark the check the loop returns to as a re-test with a visit limit, or point an outcome forward.`,
     );
   }
