@@ -3,6 +3,7 @@ import { Slot } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
 import { SWRConfig } from 'swr';
 import { SplashScreen } from '@/features/shell/splash-screen';
+import '@/lib/focus-ring';
 import { ApiError, fetcher } from '@/lib/api';
 import { SessionProvider } from '@/lib/session';
 import { fonts } from '@/lib/theme';

@@ -1,1 +1,4 @@
-export { BenchScreen as default } from '@/features/bench/bench-screen';
+import { BenchScreen } from '@/features/bench/bench-screen';
+import { sectionRoute } from '@/features/shell/section-route';
+
+export default sectionRoute('bench', BenchScreen);

@@ -1,1 +1,4 @@
-export { MembersScreen as default } from '@/features/members/members-screen';
+import { MembersScreen } from '@/features/members/members-screen';
+import { sectionRoute } from '@/features/shell/section-route';
+
+export default sectionRoute('members', MembersScreen);

@@ -1,1 +1,4 @@
-export { ProceduresScreen as default } from '@/features/procedures/procedures-screen';
+import { ProceduresScreen } from '@/features/procedures/procedures-screen';
+import { sectionRoute } from '@/features/shell/section-route';
+
+export default sectionRoute('procedures', ProceduresScreen);

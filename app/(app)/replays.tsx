@@ -1,1 +1,4 @@
-export { ReplaysScreen as default } from '@/features/replays/replays-screen';
+import { ReplaysScreen } from '@/features/replays/replays-screen';
+import { sectionRoute } from '@/features/shell/section-route';
+
+export default sectionRoute('replays', ReplaysScreen);

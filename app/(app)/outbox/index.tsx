@@ -1,1 +1,4 @@
-export { OutboxScreen as default } from '@/features/outbox/outbox-screen';
+import { OutboxScreen } from '@/features/outbox/outbox-screen';
+import { sectionRoute } from '@/features/shell/section-route';
+
+export default sectionRoute('outbox', OutboxScreen);

@@ -62,7 +62,7 @@ export function Button({
       aria-pressed={!isNavigation && selected !== undefined ? selected : undefined}
       disabled={inactive}
       onPress={onPress}
-      style={({ pressed, hovered, focused }) => [
+      style={({ pressed, hovered }) => [
         styles.base,
         variant === 'primary' || variant === 'danger' ? styles.primarySize : null,
         variant === 'tab' ? styles.tab : variant === 'nav' ? styles.nav : variant === 'row' ? styles.row : styles.action,
@@ -70,12 +70,11 @@ export function Button({
         { backgroundColor: selected && look.selectedBackground ? look.selectedBackground : look.background },
         look.border ? { borderColor: selected ? colors.primary : look.border, borderWidth: selected ? 2 : 1 } : null,
         (pressed || hovered) && !inactive ? { opacity: 0.86 } : null,
-        focused ? { outlineColor: colors.signal, outlineStyle: 'solid', outlineWidth: 3, outlineOffset: 2 } : null,
         inactive && !loading ? styles.disabled : null,
         style,
       ]}
     >
-      {selected && isNavigation ? (
+      {selected && isNavigation && !hideLabel ? (
         <View style={[variant === 'tab' ? styles.tabMarker : styles.sideMarker, { backgroundColor: colors.signal }]} />
       ) : null}
       {loading ? <ActivityIndicator color={foreground} size="small" /> : icon ? <Icon name={icon} color={foreground} size={variant === 'tab' ? 26 : 22} /> : null}

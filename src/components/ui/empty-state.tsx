@@ -25,7 +25,10 @@ export function EmptyState({ icon, title, body, action, testID = 'empty-state' }
           <Circle cx={66} cy={66} r={63} fill="none" stroke={colors.borderStrong} strokeWidth={2} strokeDasharray="4 7" />
           <Circle cx={113} cy={34} r={7} fill={colors.signal} />
         </Svg>
-        <Icon name={icon} size={56} color={colors.primary} />
+        {/* Its own View so it paints above the absolutely placed backdrop. */}
+        <View>
+          <Icon name={icon} size={56} color={colors.primary} />
+        </View>
       </View>
       <Heading level={2} style={styles.center}>
         {title}

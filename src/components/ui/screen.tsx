@@ -9,7 +9,7 @@ interface ScreenProps {
   subtitle?: string;
   /** Buttons beside the title. */
   actions?: ReactNode;
-  /** `form` narrows the column for single forms; `content` is the capped page width. */
+  /** `form` narrows the body to a readable column; `content` uses the capped page width. */
   width?: 'content' | 'form';
   testID: string;
   children: ReactNode;
@@ -28,7 +28,7 @@ export function Screen({ title, subtitle, actions, width = 'content', testID, ch
       <Head>
         <title>{`${title} · Probepath`}</title>
       </Head>
-      <View style={[styles.column, { maxWidth: width === 'form' ? layout.maxFormWidth : layout.maxContentWidth }]}>
+      <View style={styles.column}>
         <View style={styles.header}>
           <View style={styles.titles}>
             <Heading>{title}</Heading>
@@ -36,7 +36,7 @@ export function Screen({ title, subtitle, actions, width = 'content', testID, ch
           </View>
           {actions}
         </View>
-        {children}
+        {width === 'form' ? <View style={styles.form}>{children}</View> : children}
       </View>
     </ScrollView>
   );
@@ -44,7 +44,8 @@ export function Screen({ title, subtitle, actions, width = 'content', testID, ch
 
 const styles = StyleSheet.create({
   scroll: { flexGrow: 1 },
-  column: { width: '100%', alignSelf: 'center', gap: space.xl },
+  column: { width: '100%', maxWidth: layout.maxContentWidth, alignSelf: 'center', gap: space.xl },
+  form: { width: '100%', maxWidth: layout.maxFormWidth, gap: space.xl },
   header: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', justifyContent: 'space-between', gap: space.md },
   titles: { flexShrink: 1, gap: space.xs },
 });

@@ -6,11 +6,12 @@ import { Card } from '@/components/ui/card';
 import { Screen } from '@/components/ui/screen';
 import { Heading, Text } from '@/components/ui/text';
 import { useSession, useUser } from '@/lib/session';
-import { space } from '@/lib/theme';
+import { space, useBreakpoints } from '@/lib/theme';
 
 export function AccountScreen() {
   const user = useUser();
   const { signOut } = useSession();
+  const { isWide } = useBreakpoints();
   return (
     <Screen testID="account-screen" title="Account" width="form">
       <Card testID="account-card">
@@ -24,7 +25,7 @@ export function AccountScreen() {
       </Card>
       <View style={styles.signOut}>
         <Text tone="textMuted">On a shared shop phone, sign out so the next person works under their own name.</Text>
-        <Button testID="account-sign-out" label="Sign out" icon="signOut" variant="primary" onPress={() => void signOut()} />
+        <Button testID="account-sign-out" label="Sign out" icon="signOut" variant="primary" onPress={() => void signOut()} style={isWide && styles.start} />
       </View>
     </Screen>
   );
@@ -33,4 +34,5 @@ export function AccountScreen() {
 const styles = StyleSheet.create({
   who: { gap: space.xs },
   signOut: { gap: space.md },
+  start: { alignSelf: 'flex-start' },
 });

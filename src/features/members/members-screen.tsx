@@ -40,7 +40,7 @@ export function MembersScreen() {
     { title: 'E-mail', flex: 1.7, render: (m) => <Text>{m.email}</Text> },
     { title: 'Role', flex: 1.1, render: (m) => <Text>{ROLE_LABELS[m.role]}</Text> },
     { title: 'Status', flex: 1, render: (m) => <StatusBadge active={m.active} /> },
-    { title: 'Change', flex: 0.8, render: manageButton },
+    { title: 'Actions', flex: 0.8, render: manageButton },
   ];
 
   return (

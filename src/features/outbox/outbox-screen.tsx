@@ -43,29 +43,12 @@ export function OutboxScreen() {
       title="Outbox"
       subtitle="Every e-mail Probepath sent for this shop: invites and password links. Links open in a new tab."
     >
-      {isDesk ? (
-        <View style={styles.split}>
-          <View style={styles.listPane}>
-            <MailList selectedId={id} />
-          </View>
-          <Card style={styles.messagePane}>
-            {id ? (
-              <MailMessageView id={id} />
-            ) : (
-              <Text tone="textMuted" testID="outbox-pick">
-                Pick a message on the left to read it here.
-              </Text>
-            )}
-          </Card>
-        </View>
-      ) : (
-        <MailList selectedId={id} />
-      )}
+      <OutboxBody selectedId={id} split={isDesk} />
     </Screen>
   );
 }
 
-function MailList({ selectedId }: { selectedId?: string }) {
+function OutboxBody({ selectedId, split }: { selectedId?: string; split: boolean }) {
   const colors = useTheme();
   const router = useRouter();
   const mail = useMailList();
@@ -81,7 +64,8 @@ function MailList({ selectedId }: { selectedId?: string }) {
       />
     );
   }
-  return (
+
+  const list = (
     <View role="list" style={[styles.list, { borderColor: colors.border, backgroundColor: colors.surface }]} testID="mail-list">
       {mail.data.messages.map((m: MailSummary, index) => (
         <View key={m.id} role="listitem" style={index > 0 && { borderTopWidth: 1, borderTopColor: colors.border }}>
@@ -96,6 +80,21 @@ function MailList({ selectedId }: { selectedId?: string }) {
           />
         </View>
       ))}
+    </View>
+  );
+  if (!split) return list;
+  return (
+    <View style={styles.split}>
+      <View style={styles.listPane}>{list}</View>
+      <Card style={styles.messagePane}>
+        {selectedId ? (
+          <MailMessageView id={selectedId} />
+        ) : (
+          <Text tone="textMuted" testID="outbox-pick">
+            Pick a message on the left to read it here.
+          </Text>
+        )}
+      </Card>
     </View>
   );
 }

@@ -1,7 +1,7 @@
 import { Redirect, Slot, useRouter, useSegments } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
-import { ROLE_LABELS, type Section, SECTIONS, sectionsFor } from '@shared/auth/roles';
+import { ROLE_LABELS, sectionsFor } from '@shared/auth/roles';
 import type { SessionUser } from '@shared/api/types';
 import { BrandMark } from '@/components/ui/brand-mark';
 import { Button } from '@/components/ui/button';
@@ -9,7 +9,6 @@ import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Text } from '@/components/ui/text';
 import { SECTION_NAV } from '@/features/shell/sections';
-import { SectionUnavailable } from '@/features/shell/section-unavailable';
 import { useSession } from '@/lib/session';
 import { layout, space, useBreakpoints, useTheme } from '@/lib/theme';
 
@@ -41,11 +40,10 @@ function Shell({ user }: { user: SessionUser }) {
   const router = useRouter();
   const insets = useSafeAreaInsets();
   const { signOut } = useSession();
+  // Only marks the current section; access is checked by each section's route (sectionRoute).
   const segments = useSegments() as string[];
   const here = segments[1];
   const allowed = sectionsFor(user.role);
-  const forbidden = SECTIONS.includes(here as Section) && !allowed.includes(here as Section);
-  const page = forbidden ? <SectionUnavailable section={here as Section} role={user.role} /> : <Slot />;
 
   const navItems = allowed.map((section) => (
     <Button
@@ -95,7 +93,7 @@ function Shell({ user }: { user: SessionUser }) {
           </View>
         </View>
         <View role="main" style={styles.fill}>
-          {page}
+          <Slot />
         </View>
       </View>
     );
@@ -118,7 +116,7 @@ function Shell({ user }: { user: SessionUser }) {
         />
       </View>
       <View role="main" style={styles.fill}>
-        {page}
+        <Slot />
       </View>
       <View
         role="navigation"

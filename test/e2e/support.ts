@@ -1,0 +1,135 @@
+import { type ChildProcess, spawn } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { type Browser, type BrowserContext, chromium, type Page } from 'playwright-core';
+import type { Role } from '@shared/auth/roles';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '@server/seed/demo-accounts';
+
+const ROOT = path.resolve(__dirname, '../..');
+const SHOTS = path.join(ROOT, 'screenshots');
+
+export const SIZES = {
+  phone: { width: 390, height: 844 },
+  desk: { width: 1440, height: 900 },
+} as const;
+export type Size = keyof typeof SIZES;
+
+export const demo = (role: Role) => DEMO_ACCOUNTS.find((a) => a.role === role)!;
+export { DEMO_PASSWORD };
+
+export interface RunningServer {
+  url: string;
+  stop(): Promise<void>;
+}
+
+/** The real server on a free port with a fresh data folder; resolves once it says it is ready. */
+export function startServer(): Promise<RunningServer> {
+  const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'probepath-e2e-'));
+  const child: ChildProcess = spawn(path.join(ROOT, 'node_modules/.bin/tsx'), ['server/index.ts'], {
+    cwd: ROOT,
+    env: {
+      ...process.env,
+      PORT: '0',
+      DATA_DIR: dataDir,
+      JWT_SECRET: 'e2e-secret-'.padEnd(48, 'x'),
+      BUILD_WEB: '0',
+      LOG_LEVEL: 'warn',
+    },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let output = '';
+  const stop = () =>
+    new Promise<void>((resolve) => {
+      child.once('exit', () => resolve());
+      if (child.exitCode !== null) resolve();
+      else child.kill('SIGTERM');
+    }).then(() => fs.rmSync(dataDir, { recursive: true, force: true }));
+
+  return new Promise((resolve, reject) => {
+    const timer = setTimeout(() => {
+      void stop();
+      reject(new Error(`The server did not say it was ready within 60 s:\n${output}`));
+    }, 60_000);
+    const read = (chunk: Buffer) => {
+      output += chunk.toString();
+      const ready = /Probepath is ready at (http:\/\/localhost:\d+)/.exec(output);
+      if (ready) {
+        clearTimeout(timer);
+        resolve({ url: ready[1], stop });
+      }
+    };
+    child.stdout!.on('data', read);
+    child.stderr!.on('data', read);
+    child.once('exit', (code) => {
+      clearTimeout(timer);
+      reject(new Error(`The server exited with ${code} before it was ready:\n${output}`));
+    });
+  });
+}
+
+export function launchBrowser(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: '/usr/bin/chromium',
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+}
+
+export async function openPage(
+  browser: Browser,
+  baseURL: string,
+  size: Size,
+  colorScheme: 'light' | 'dark' = 'light',
+): Promise<{ context: BrowserContext; page: Page }> {
+  const context = await browser.newContext({ baseURL, viewport: SIZES[size], colorScheme });
+  const page = await context.newPage();
+  return { context, page };
+}
+
+/** Saves screenshots/<size>/<name>.png once web fonts are in. */
+export async function shot(page: Page, size: Size, name: string) {
+  await page.evaluate(() => document.fonts.ready);
+  const dir = path.join(SHOTS, size);
+  fs.mkdirSync(dir, { recursive: true });
+  await page.screenshot({ path: path.join(dir, `${name}.png`), fullPage: true });
+}
+
+/** Signs in through the form and waits for the first section the role lands on. */
+export async function signIn(page: Page, email: string, password: string, landing: string) {
+  await page.goto('/sign-in');
+  await page.getByTestId('sign-in-email').fill(email);
+  await page.getByTestId('sign-in-password').fill(password);
+  await page.getByTestId('sign-in-submit').click();
+  await page.waitForURL(`**/${landing}`);
+}
+
+/** The testIDs of the section buttons the shell shows, in order. */
+export async function navSections(page: Page): Promise<string[]> {
+  const ids = await page.locator('[role="navigation"] [data-testid^="nav-"]').evaluateAll((nodes) =>
+    nodes.map((n) => n.getAttribute('data-testid')!.slice('nav-'.length)),
+  );
+  return ids.filter((id) => id !== 'account');
+}
+
+/** Calls the API as a signed-in member, e.g. to read the owner's outbox. */
+export async function apiAs(baseURL: string, email: string, password: string) {
+  const signInResponse = await fetch(`${baseURL}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  });
+  const { token } = (await signInResponse.json()) as { token: string };
+  return async <T>(pathname: string): Promise<T> => {
+    const response = await fetch(`${baseURL}${pathname}`, { headers: { Authorization: `Bearer ${token}` } });
+    return (await response.json()) as T;
+  };
+}
