@@ -26,7 +26,7 @@ export function explainEvaluation(spec: Spec, evaluation: Evaluation, quantity: 
       return verdict === 'in_spec' ? 'OL in reverse against a forward reading: it blocks one way, as it should.' : 'Both readings are at or below zero: the part is shorted.';
     }
     if (compared === 0) return 'OL forward but a reading in reverse: the part reads backwards.';
-    return `Reverse/forward ratio ${ratioText(compared)} is ${relation(verdict)} the minimum of ${ratioText(limits.min ?? 0)}${margin}.`;
+    return `Reverse/forward ratio ${ratioText(compared)} ${relation(verdict, 'meets')} the minimum of ${ratioText(limits.min ?? 0)}${margin}.`;
   }
 
   const target = spec.kind === 'agree_with' ? agreementText(evaluation, fmt) : limitsText(limits.min, limits.max, fmt);
@@ -38,21 +38,22 @@ export function explainEvaluation(spec: Spec, evaluation: Evaluation, quantity: 
   if (spec.kind === 'expect_open') {
     return limits.min === null
       ? `${fmt(compared)}: a reading where an open circuit (OL) is expected.`
-      : `${fmt(compared)} is ${relation(verdict)} ${target}${margin}.`;
+      : `${fmt(compared)} ${relation(verdict, 'meets')} ${target}${margin}.`;
   }
-  return `${fmt(compared)} is ${relation(verdict)} ${target}${corrected}${margin}.`;
+  const passing = spec.kind === 'agree_with' ? 'agrees with' : limits.min !== null && limits.max !== null ? 'is within' : 'meets';
+  return `${fmt(compared)} ${relation(verdict, passing)} ${target}${corrected}${margin}.`;
 }
 
-function relation(verdict: Evaluation['verdict']): string {
+function relation(verdict: Evaluation['verdict'], passing: string): string {
   switch (verdict) {
     case 'in_spec':
-      return 'within';
+      return passing;
     case 'low':
-      return 'below';
+      return 'is below';
     case 'high':
-      return 'above';
+      return 'is above';
     default:
-      return 'too close to call against';
+      return 'is too close to call against';
   }
 }
 
