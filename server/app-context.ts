@@ -1,7 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { Logger } from 'pino';
 import type { Config } from './config';
-import type { Write } from './db/writer';
+import type { Write, WriteSync } from './db/writer';
 import type { Mailer } from './mail/mailer';
 
 /** What every handler may use; built once per app (one per test file in tests). */
@@ -9,6 +9,8 @@ export interface AppContext {
   ds: DataSource;
   /** Runs a write transaction; all writes go through it (see db/writer.ts). */
   write: Write;
+  /** Runs a synchronous transaction of prepared statements in the same queue (hot paths). */
+  writeSync: WriteSync;
   config: Config;
   mailer: Mailer;
   log: Logger;

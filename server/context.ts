@@ -20,13 +20,14 @@ export interface Runtime {
 /** Wires database, mail (the local fake unless SMTP_URL is set), logger and secret into one context. */
 export async function createRuntime(config: Config, ds: DataSource): Promise<Runtime> {
   const log = pino({ level: config.logLevel });
-  const write = createWriter(ds);
+  const { write, writeSync } = createWriter(ds);
   const fakeSmtp = config.smtpUrl ? null : await startFakeSmtp(write);
   const mailer = createMailer(config.smtpUrl ?? fakeSmtp!.url, config.mailFrom);
   let listenUrl = `http://localhost:${config.port}`;
   const ctx: AppContext = {
     ds,
     write,
+    writeSync,
     config,
     mailer,
     log,

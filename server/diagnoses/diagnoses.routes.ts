@@ -1,18 +1,19 @@
 import type { EntityManager } from 'typeorm';
 import type { DiagnosisSummary, StepAnswer } from '@shared/api/diagnosis-types';
-import { decideStep, type PathSoFar } from '@shared/diagnosis/decide-step';
+import { decideStep } from '@shared/diagnosis/decide-step';
 import { abandonSchema, concludeSchema, startDiagnosisSchema, submitStepSchema } from '@shared/diagnosis/schemas';
 import type { ConcludeInput, StartDiagnosisInput, SubmitStepInput } from '@shared/diagnosis/schemas';
 import { ApiError, notFound } from '../http/api-error';
 import type { AuthedRequest, RouteDef } from '../http/route';
-import { answerOnce } from '../idempotency/with-idempotency';
+import { answerOnce, answerOnceSync } from '../idempotency/with-idempotency';
 import { Job } from '../jobs/job.entity';
 import { Meter } from '../meters/meter.entity';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
 import { Procedure } from '../procedures/procedure.entity';
 import { DiagnosisStep } from './diagnosis-step.entity';
 import { Diagnosis } from './diagnosis.entity';
-import { toDetail, toStepView, toSummary, type LoadedDiagnosis } from './diagnosis-views';
+import { stepStoreOf, type NewStep } from './step-store';
+import { toDetail, toSummary, type LoadedDiagnosis } from './diagnosis-views';
 
 const RUNNERS = ['owner', 'lead', 'tech'] as const;
 const EVERYONE = ['owner', 'lead', 'tech', 'apprentice'] as const;
@@ -26,16 +27,12 @@ async function loadDiagnosis(m: EntityManager, req: AuthedRequest): Promise<Load
   return d as LoadedDiagnosis;
 }
 
-function requireOpen(d: Diagnosis) {
+function requireOpen(d: { status: string }) {
   if (d.status !== 'open') throw new ApiError(409, 'diagnosis_closed', `This diagnosis is ${d.status}; it takes no more steps.`);
 }
 
 async function stepsOf(m: EntityManager, diagnosisId: string) {
   return m.getRepository(DiagnosisStep).find({ where: { diagnosisId }, relations: { by: true }, order: { seq: 'ASC' } });
-}
-
-function pathSoFar(steps: DiagnosisStep[]): PathSoFar {
-  return steps.filter((s) => !s.retracted).map((s) => ({ checkId: s.checkId, value: s.valueSi, overRange: s.overRange, uncertainty: (s.evaluation as { uncertainty?: number } | null)?.uncertainty }));
 }
 
 export const diagnosisRoutes: RouteDef[] = [
@@ -130,23 +127,25 @@ export const diagnosisRoutes: RouteDef[] = [
     body: submitStepSchema,
     async handler(req, res, ctx) {
       const input = req.body as SubmitStepInput;
-      await answerOnce(ctx, req, res, async (tx) => {
-        const d = await loadDiagnosis(tx, req);
+      const store = stepStoreOf(ctx.ds);
+      await answerOnceSync(ctx, req, res, () => {
+        const d = store.diagnosis(String(req.params.id), req.member.shopId);
+        if (!d) throw notFound('diagnosis');
         requireOpen(d);
         if (input.checkId !== d.currentCheckId) {
           throw new ApiError(409, 'not_current_check', 'The diagnosis has moved on from that check. Reload to see where it stands.', undefined, { currentCheckId: d.currentCheckId });
         }
-        const steps = await tx.getRepository(DiagnosisStep).find({ where: { diagnosisId: d.id }, order: { seq: 'ASC' } });
-        const decision = decideStep(d.version.document, input.checkId, { reading: input.reading, choiceId: input.choiceId }, {
-          meterRanges: d.meter.ranges,
+        const { lastSeq, path } = store.steps(d.id);
+        const decision = decideStep(store.document(d.versionId), input.checkId, { reading: input.reading, choiceId: input.choiceId }, {
+          meterRanges: d.meterRanges,
           ambientC: d.ambientC,
-          path: pathSoFar(steps),
+          path: path.map((p) => ({ checkId: p.checkId, value: p.valueSi, overRange: p.overRange, uncertainty: p.uncertainty })),
         });
         if (!decision.ok) throw new ApiError(400, decision.code, decision.message, { [decision.field]: decision.message });
-        const step = await tx.getRepository(DiagnosisStep).save({
+        const step: NewStep = {
           shopId: d.shopId,
           diagnosisId: d.id,
-          seq: (steps.at(-1)?.seq ?? 0) + 1,
+          seq: lastSeq + 1,
           checkId: input.checkId,
           readingText: input.reading ?? null,
           valueSi: decision.value,
@@ -158,12 +157,13 @@ export const diagnosisRoutes: RouteDef[] = [
           note: input.note,
           byId: req.member.id,
           recordedAt: new Date(),
-          retracted: false,
-          retractedAt: null,
           idempotencyKey: req.get('idempotency-key') ?? null,
-        });
-        await tx.getRepository(Diagnosis).update({ id: d.id }, { currentCheckId: decision.nextCheckId });
-        const answer: StepAnswer = { step: toStepView(step, req.member.name), currentCheckId: decision.nextCheckId };
+        };
+        const id = store.record(step);
+        const answer: StepAnswer = {
+          step: { ...step, id, by: req.member.name, recordedAt: step.recordedAt.toISOString(), retracted: false, retractedAt: null },
+          currentCheckId: decision.nextCheckId,
+        };
         return { status: 201, body: answer };
       });
     },

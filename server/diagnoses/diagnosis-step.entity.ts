@@ -1,4 +1,5 @@
 import { Column, Entity, Index, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
+import type { Evaluation } from '@shared/engine/evaluate';
 import type { Verdict } from '@shared/engine/verdict';
 import { User } from '../users/user.entity';
 import { Diagnosis } from './diagnosis.entity';
@@ -48,7 +49,7 @@ export class DiagnosisStep {
 
   /** The evaluation as computed on the server (limits, uncertainty, explanation). */
   @Column('simple-json', { nullable: true })
-  evaluation: unknown;
+  evaluation: Evaluation | null;
 
   @Column('text', { nullable: true })
   nextCheckId: string | null;

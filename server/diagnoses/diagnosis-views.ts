@@ -22,7 +22,7 @@ export const toStepView = (s: DiagnosisStep, byName: string): StepView => ({
   overRange: s.overRange,
   verdict: s.verdict,
   choiceId: s.choiceId,
-  evaluation: (s.evaluation as Evaluation | null) ?? null,
+  evaluation: s.evaluation,
   nextCheckId: s.nextCheckId,
   note: s.note,
   by: byName,

@@ -30,13 +30,16 @@ export interface Harness {
   close(): Promise<void>;
 }
 
-/** A fresh database, mail fake and app per test file; the demo shop plus a second shop. */
-export async function createHarness(options: AppOptions = {}): Promise<Harness> {
+/**
+ * A fresh database, mail fake and app per test file: the demo shop's accounts
+ * (and, with `demoWorkshop`, its procedures, meters and diagnoses) plus a second shop.
+ */
+export async function createHarness(options: AppOptions & { demoWorkshop?: boolean } = {}): Promise<Harness> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'probepath-api-'));
   const config = readConfig({ DATA_DIR: dataDir, LOG_LEVEL: 'silent', JWT_SECRET: 'test-secret-'.padEnd(48, 'x'), PUBLIC_URL: 'http://probepath.test' });
   const ds = await openDatabase(path.join(dataDir, 'test.sqlite'));
   const runtime = await createRuntime(config, ds);
-  await seedDemo(ds);
+  await seedDemo(ds, { workshop: options.demoWorkshop === true });
   const other = await ds.getRepository(Shop).save({ name: 'Copperfield Small Engines' });
   await ds.getRepository(User).save({
     shopId: other.id,

@@ -1,0 +1,83 @@
+/**
+ * Step submissions per second and p99 latency at 16 connections against
+ * Probepath, beside a bare Express JSON endpoint measured in the same run.
+ * Run with `npm run bench`. Figures are ratios against that baseline.
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
+import path from 'node:path';
+import autocannon from 'autocannon';
+
+const ROOT = path.resolve(__dirname, '..');
+const CONNECTIONS = 16;
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
+
+function startServer(mode: 'bare' | 'app'): Promise<{ child: ChildProcess; info: { port: number; token?: string; idFile?: string } }> {
+  const child = spawn(path.join(ROOT, 'node_modules/.bin/tsx'), ['bench/bench-server.ts', mode], { cwd: ROOT, stdio: ['ignore', 'pipe', 'inherit'] });
+  return new Promise((resolve, reject) => {
+    let out = '';
+    child.stdout!.on('data', (c: Buffer) => {
+      out += c.toString();
+      const line = out.split('\n').find((l) => l.startsWith('{'));
+      if (line) resolve({ child, info: JSON.parse(line) });
+    });
+    child.once('exit', (code) => reject(new Error(`bench server (${mode}) exited with ${code}`)));
+  });
+}
+
+interface Result {
+  rps: number;
+  p99: number;
+  p50: number;
+  errors: number;
+  non2xx: number;
+}
+
+async function load(opts: autocannon.Options): Promise<Result> {
+  const r = await autocannon({ ...opts, connections: CONNECTIONS, duration: SECONDS });
+  return { rps: r.requests.average, p99: r.latency.p99, p50: r.latency.p50, errors: r.errors, non2xx: r.non2xx };
+}
+
+async function main() {
+  const bare = await startServer('bare');
+  let n = 0;
+  const bareResult = await load({
+    url: `http://127.0.0.1:${bare.info.port}`,
+    requests: [{ method: 'POST', setupRequest: (req) => ({ ...req, path: `/echo/${n++}`, headers: { 'content-type': 'application/json' }, body: JSON.stringify({ checkId: 'coil', reading: '0.455k' }) }) }],
+  });
+  bare.child.kill('SIGKILL');
+
+  const app = await startServer('app');
+  const ids: string[] = JSON.parse(fs.readFileSync(app.info.idFile!, 'utf8'));
+  let i = 0;
+  const appResult = await load({
+    url: `http://127.0.0.1:${app.info.port}`,
+    requests: [
+      {
+        method: 'POST',
+        setupRequest: (req) => {
+          const id = ids[i++ % ids.length];
+          return {
+            ...req,
+            path: `/api/diagnoses/${id}/steps`,
+            headers: { 'content-type': 'application/json', authorization: `Bearer ${app.info.token}`, 'idempotency-key': `bench-${id}` },
+            body: JSON.stringify({ checkId: 'coil', reading: '0.455k' }),
+          };
+        },
+      },
+    ],
+  });
+  app.child.kill('SIGKILL');
+  if (i > ids.length) console.warn(`note: ${i - ids.length} requests re-used a diagnosis (answered by idempotent replay); raise BENCH_DIAGNOSES`);
+
+  const row = (name: string, r: Result) => `${name.padEnd(34)} ${r.rps.toFixed(0).padStart(7)} req/s   p50 ${String(r.p50).padStart(4)} ms   p99 ${String(r.p99).padStart(4)} ms   errors ${r.errors} non-2xx ${r.non2xx}`;
+  console.log(`\nStep submission, ${CONNECTIONS} connections, ${SECONDS} s each`);
+  console.log(row('bare Express JSON endpoint', bareResult));
+  console.log(row('POST /api/diagnoses/:id/steps', appResult));
+  console.log(`ratio (steps / bare): ${(appResult.rps / bareResult.rps).toFixed(2)}   target ≥ 0.50; p99 target < 15 ms`);
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});
