@@ -55,6 +55,3 @@ export async function api<T>(path: string, method: Method = 'GET', body?: unknow
 
 /** The swr fetcher: the key is the API path. */
 export const fetcher = <T>(path: string) => api<T>(path);
-
-/** Mutation helpers for useSWRMutation: `arg` is the JSON body. */
-export const post = <T>(path: string, { arg }: { arg: unknown }) => api<T>(path, 'POST', arg);

@@ -5,7 +5,7 @@ import { ME_KEY, useMe } from '@/hooks/use-me';
 import { type ApiError, setAuthToken, setUnauthorizedHandler } from '@/lib/api';
 import { clearToken, readToken, writeToken } from '@/lib/token-store';
 
-export type SessionState =
+type SessionState =
   | { status: 'loading' }
   | { status: 'signed-out' }
   | { status: 'signed-in'; user: SessionUser }

@@ -4,7 +4,7 @@ import path from 'node:path';
 import { ensureWebBuild } from '@server/web/build-web';
 
 const ROOT = path.resolve(__dirname, '../..');
-export const CHROMIUM = '/usr/bin/chromium';
+const CHROMIUM = '/usr/bin/chromium';
 
 /** Browser tests need Debian's Chromium and a web export no older than the client sources. */
 export default function setup() {

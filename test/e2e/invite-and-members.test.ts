@@ -49,7 +49,7 @@ describe('inviting a member', () => {
     async (ownerSize, inviteeSize, role, email, name) => {
       const owner = await ownerPage(ownerSize);
       await sendInvite(owner.page, email, role);
-      await shot(owner.page, ownerSize, 'members-invite-sent');
+      await shot(owner.page, ownerSize, 'members-invite-sent', owner.page.getByTestId(`invite-${email}`));
 
       const link = await linkInOutbox(owner.page, ownerSize, email, 'outbox-invite');
       expect(link).toMatch(/\/invite\?token=/);
@@ -88,7 +88,7 @@ describe('inviting a member', () => {
     await page.getByTestId('invite-submit').click();
     await page.getByTestId('form-error').waitFor();
     expect(await page.getByTestId('invite-form').textContent()).toContain('already has a Probepath account');
-    await shot(page, 'desk', 'members-invite-refused');
+    await shot(page, 'desk', 'members-invite-refused', page.getByTestId('invite-submit'));
 
     await sendInvite(page, 'ash@harrowlane.example', 'lead');
     await page.getByTestId('revoke-ash@harrowlane.example').click();
@@ -108,11 +108,11 @@ describe('managing members', () => {
     // The picker shows the role the server now holds for the member.
     await expect.poll(() => page.getByTestId('member-role-lead').getAttribute('aria-pressed')).toBe('true');
     expect(await row.textContent()).toContain('Lead technician');
-    await shot(page, size, 'members-manage');
+    await shot(page, size, 'members-manage', page.getByTestId('member-deactivate'));
 
     await page.getByTestId('member-deactivate').click();
     await page.getByTestId('member-deactivate-confirm').waitFor();
-    await shot(page, size, 'members-deactivate-confirm');
+    await shot(page, size, 'members-deactivate-confirm', page.getByTestId('member-deactivate-yes'));
     await page.getByTestId('member-deactivate-yes').click();
     await expect.poll(() => row.textContent()).toContain('Deactivated');
 

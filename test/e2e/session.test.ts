@@ -65,6 +65,44 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     await context.close();
   });
 
+  it('loading and unreachable states say what is happening and recover on "Try again"', async () => {
+    const { context, page } = await openPage(browser, server.url, size);
+    await signIn(page, demo('owner').email, DEMO_PASSWORD, 'bench');
+
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    await page.route('**/api/members', async (route) => {
+      await held;
+      await route.continue();
+    });
+    await page.getByTestId('nav-members').click();
+    await page.getByTestId('loading-state').first().waitFor();
+    await shot(page, size, 'members-loading');
+    release();
+    await page.getByTestId('members-screen').getByText(demo('tech').email).waitFor();
+
+    await page.unroute('**/api/members');
+    await page.route('**/api/mail', (route) => route.abort());
+    await page.getByTestId('nav-outbox').click();
+    await page.getByTestId('error-state').waitFor();
+    expect(await page.getByTestId('error-state').textContent()).toContain('could not reach the server');
+    await shot(page, size, 'outbox-unreachable');
+    await page.unroute('**/api/mail');
+    await page.getByTestId('retry').click();
+    await page.getByTestId('error-state').waitFor({ state: 'detached' });
+    await page.getByTestId('empty-state').waitFor();
+
+    // A session check that cannot reach the server keeps the session and offers a retry.
+    await page.route('**/api/auth/me', (route) => route.abort());
+    await page.reload();
+    await page.getByTestId('error-state').waitFor();
+    await shot(page, size, 'session-unreachable');
+    await page.unroute('**/api/auth/me');
+    await page.getByTestId('retry').click();
+    await page.getByTestId('outbox-screen').waitFor();
+    await context.close();
+  });
+
   it('an unknown address shows the not-found page', async () => {
     const { context, page } = await openPage(browser, server.url, size);
     await page.goto('/no-such-place');

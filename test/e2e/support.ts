@@ -2,7 +2,7 @@ import { type ChildProcess, spawn } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { type Browser, type BrowserContext, chromium, type Page } from 'playwright-core';
+import { type Browser, type BrowserContext, chromium, type Locator, type Page } from 'playwright-core';
 import type { Role } from '@shared/auth/roles';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '@server/seed/demo-accounts';
 
@@ -95,9 +95,13 @@ export async function openPage(
   return { context, page };
 }
 
-/** Saves screenshots/<size>/<name>.png once web fonts are in. */
-export async function shot(page: Page, size: Size, name: string) {
+/**
+ * Saves screenshots/<size>/<name>.png once web fonts are in. Pages scroll
+ * inside the app, so `focus` scrolls the part worth seeing into view first.
+ */
+export async function shot(page: Page, size: Size, name: string, focus?: Locator) {
   await page.evaluate(() => document.fonts.ready);
+  await focus?.scrollIntoViewIfNeeded();
   const dir = path.join(SHOTS, size);
   fs.mkdirSync(dir, { recursive: true });
   await page.screenshot({ path: path.join(dir, `${name}.png`), fullPage: true });

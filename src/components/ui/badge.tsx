@@ -3,7 +3,7 @@ import { Icon, type IconName } from '@/components/ui/icon';
 import { Text } from '@/components/ui/text';
 import { radius, space, useTheme } from '@/lib/theme';
 
-export type BadgeTone = 'neutral' | 'success' | 'warning' | 'danger' | 'primary';
+type BadgeTone = 'neutral' | 'success' | 'warning' | 'danger' | 'primary';
 
 /** A short status word on a tinted chip; an optional icon keeps it from being colour-only. */
 export function Badge({ label, tone = 'neutral', icon }: { label: string; tone?: BadgeTone; icon?: IconName }) {

@@ -10,7 +10,7 @@ import { layout, type Palette, radius, space, type, useTheme } from '@/lib/theme
  * button as pressed; each shows a bar or outline, so selection never rests on
  * colour alone.
  */
-export type ButtonVariant = 'primary' | 'secondary' | 'danger' | 'quiet' | 'tab' | 'nav' | 'row';
+type ButtonVariant = 'primary' | 'secondary' | 'danger' | 'quiet' | 'tab' | 'nav' | 'row';
 
 export interface ButtonProps {
   /** Visible text and accessible name. */

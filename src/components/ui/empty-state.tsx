@@ -5,7 +5,7 @@ import { Icon, type IconName } from '@/components/ui/icon';
 import { Heading, Text } from '@/components/ui/text';
 import { space, useTheme } from '@/lib/theme';
 
-export interface EmptyStateProps {
+interface EmptyStateProps {
   icon: IconName;
   title: string;
   /** What will appear here and how to get it. */

@@ -50,7 +50,7 @@ const drawings = {
       <Path d="M8 11V7.5a4 4 0 0 1 8 0V11M12 15v2" />
     </>
   ),
-  unplugged: <Path d="M7 3v4M13 3v4M5 7h10v3a5 5 0 0 1-10 0zM10 15v2M16 19.5c1.5-1 3.5-1 5 0M10 20h2" />,
+  unplugged: <Path d="M2 12h5M7 8h3v8H7zM22 12h-5M17 8.5v7M17 10h-3M17 14h-3" />,
   alert: <Path d="M12 3.5L21.5 20h-19zM12 10v4.5M12 17.5v.5" />,
   check: <Path d="M5 12.5l4.5 4.5L19 7" />,
   back: <Path d="M15 5l-7 7 7 7" />,

@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
 import { radius, space, type, useTheme } from '@/lib/theme';
 
-export interface TextFieldProps
+interface TextFieldProps
   extends Pick<TextInputProps, 'autoComplete' | 'keyboardType' | 'textContentType' | 'autoFocus' | 'inputMode'> {
   /** The formik field this input edits. */
   name: string;

@@ -1,10 +1,10 @@
 import { Text as NativeText, type TextProps as NativeTextProps } from 'react-native';
 import { type Palette, type, useTheme } from '@/lib/theme';
 
-export type TextVariant = keyof typeof type;
+type TextVariant = keyof typeof type;
 type Tone = 'text' | 'textMuted' | 'primary' | 'danger' | 'success' | 'warning' | 'onChrome' | 'onChromeMuted';
 
-export interface TextProps extends NativeTextProps {
+interface TextProps extends NativeTextProps {
   variant?: TextVariant;
   tone?: Tone;
 }
