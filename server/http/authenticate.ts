@@ -1,31 +1,64 @@
+import type Database from 'better-sqlite3';
 import type { RequestHandler } from 'express';
 import type { Role } from '@shared/auth/roles';
 import type { AppContext } from '../app-context';
 import { readSessionToken } from '../auth/session-token';
+import { dateFromSql } from '../db/sql-values';
+import { sqliteOf } from '../db/writer';
+import { Shop } from '../shops/shop.entity';
 import { User } from '../users/user.entity';
 import { ApiError } from './api-error';
 import type { AuthedRequest } from './route';
+
+interface MemberRow {
+  id: string;
+  shopId: string;
+  email: string;
+  name: string;
+  role: Role;
+  active: number;
+  createdAt: string;
+  shopName: string;
+}
+
+const lookups = new WeakMap<object, Database.Statement>();
+
+/** One prepared lookup per request: it runs on every API call. */
+function memberLookup(ctx: AppContext): Database.Statement {
+  const db = sqliteOf(ctx.ds);
+  let stmt = lookups.get(db);
+  if (!stmt) {
+    stmt = db.prepare('SELECT u.id, u.shopId, u.email, u.name, u.role, u.active, u.createdAt, s.name AS shopName FROM user u JOIN shop s ON s.id = u.shopId WHERE u.id = ?');
+    lookups.set(db, stmt);
+  }
+  return stmt;
+}
+
+function toUser(row: MemberRow): User {
+  const shop = Object.assign(new Shop(), { id: row.shopId, name: row.shopName });
+  return Object.assign(new User(), { id: row.id, shopId: row.shopId, email: row.email, name: row.name, role: row.role, active: row.active === 1, createdAt: dateFromSql(row.createdAt), shop });
+}
 
 /**
  * Checks the bearer token, then loads the member on every request so a role
  * change or a deactivation takes effect at once.
  */
 export function authenticate(ctx: AppContext, roles: readonly Role[]): RequestHandler {
-  return async (req, _res, next) => {
+  return (req, _res, next) => {
     const header = req.get('authorization') ?? '';
     const match = /^Bearer ([A-Za-z0-9._-]{10,2000})$/.exec(header);
     if (!match) throw new ApiError(401, 'unauthenticated', 'Sign in to continue.');
     const claims = readSessionToken(ctx, match[1]);
     if (!claims) throw new ApiError(401, 'invalid_token', 'Your session has expired or is not valid. Sign in again.');
-    const user = await ctx.ds.getRepository(User).findOne({ where: { id: claims.sub }, relations: { shop: true } });
-    if (!user || user.shopId !== claims.shop) {
+    const row = memberLookup(ctx).get(claims.sub) as MemberRow | undefined;
+    if (!row || row.shopId !== claims.shop) {
       throw new ApiError(401, 'invalid_token', 'Your session is not valid any more. Sign in again.');
     }
-    if (!user.active) throw new ApiError(401, 'deactivated', 'This account has been deactivated. Ask the shop owner.');
-    if (!roles.includes(user.role)) {
+    if (!row.active) throw new ApiError(401, 'deactivated', 'This account has been deactivated. Ask the shop owner.');
+    if (!roles.includes(row.role)) {
       throw new ApiError(403, 'forbidden', 'Your role does not allow this. Ask the shop owner if you need it.');
     }
-    (req as AuthedRequest).member = user;
+    (req as AuthedRequest).member = toUser(row);
     next();
   };
 }
