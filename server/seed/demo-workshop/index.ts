@@ -1,0 +1,129 @@
+import type { EntityManager } from 'typeorm';
+import type { Role } from '@shared/auth/roles';
+import { DiagnosisStep } from '../../diagnoses/diagnosis-step.entity';
+import { Diagnosis } from '../../diagnoses/diagnosis.entity';
+import { Job } from '../../jobs/job.entity';
+import { Machine } from '../../machines/machine.entity';
+import { Meter } from '../../meters/meter.entity';
+import { ProcedureVersion } from '../../procedures/procedure-version.entity';
+import { Procedure } from '../../procedures/procedure.entity';
+import type { User } from '../../users/user.entity';
+import { DEMO_DIAGNOSES, replayDiagnosis } from './diagnoses';
+import { DEMO_JOBS } from './machines-and-jobs';
+import { DEMO_METERS } from './meters';
+import { DEMO_PROCEDURES } from './procedures';
+import { addMinutes, daysBefore, resolveWhen } from './time';
+
+/**
+ * The demo shop's workshop content: meters, machines and jobs, five published procedures with a version
+ * history and a draft, three concluded diagnoses and one in progress. Everything is invented for the demo.
+ * Runs inside the seed's transaction; a shop that already has procedures is left alone.
+ */
+export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, users: Record<Role, User>, now: Date = new Date()): Promise<void> {
+  const shopId = shop.id;
+  if (await tx.getRepository(Procedure).existsBy({ shopId })) return;
+  const lead = users.lead;
+
+  const meters = new Map<string, Meter>();
+  for (const [i, m] of DEMO_METERS.entries()) {
+    const saved = await tx.getRepository(Meter).save({ shopId, name: m.name, model: m.model, ranges: m.ranges, active: true, createdAt: daysBefore(now, 180 - i * 30) });
+    meters.set(m.key, saved);
+  }
+
+  const jobs = new Map<string, Job>();
+  for (const j of DEMO_JOBS) {
+    const booked = resolveWhen(now, j.booked);
+    const machine = await tx.getRepository(Machine).save({ shopId, ...j.machine, createdAt: booked });
+    const job = await tx.getRepository(Job).save({
+      shopId,
+      machineId: machine.id,
+      customerName: j.customerName,
+      customerContact: j.customerContact,
+      customerEmail: j.customerEmail,
+      complaint: j.complaint,
+      reference: j.reference,
+      createdAt: addMinutes(booked, 2),
+    });
+    jobs.set(j.key, job);
+  }
+
+  /** The version a new diagnosis would have run on each procedure: its newest published one. */
+  const running = new Map<string, ProcedureVersion>();
+  for (const p of DEMO_PROCEDURES) {
+    const procedure = await tx.getRepository(Procedure).save({
+      shopId,
+      title: p.title,
+      complaint: p.complaint,
+      family: p.family,
+      createdById: lead.id,
+      createdAt: daysBefore(now, p.createdDaysAgo),
+    });
+    let number = 0;
+    for (const v of p.versions) {
+      const draft = v.status === 'draft';
+      const at = daysBefore(now, v.daysAgo);
+      const retiredAt = v.retiredDaysAgo === undefined ? null : daysBefore(now, v.retiredDaysAgo);
+      const saved = await tx.getRepository(ProcedureVersion).save({
+        shopId,
+        procedureId: procedure.id,
+        status: v.status,
+        number: draft ? null : ++number,
+        revision: v.revision ?? 1,
+        document: v.document,
+        updatedById: lead.id,
+        publishedAt: draft ? null : at,
+        publishedById: draft ? null : lead.id,
+        retiredAt,
+        updatedAt: retiredAt ?? at,
+      });
+      if (v.status === 'published') running.set(p.key, saved);
+    }
+  }
+
+  for (const d of DEMO_DIAGNOSES) {
+    const version = running.get(d.procedure)!;
+    const meter = meters.get(d.meter)!;
+    const job = jobs.get(d.job)!;
+    const by = users[d.by];
+    const replay = replayDiagnosis(version.document, d, meter.ranges);
+    const startedAt = resolveWhen(now, d.start);
+    const diagnosis = await tx.getRepository(Diagnosis).save({
+      shopId,
+      versionId: version.id,
+      machineId: job.machineId,
+      jobId: job.id,
+      meterId: meter.id,
+      ambientC: d.ambientC,
+      startedById: by.id,
+      status: d.conclusion ? 'concluded' : 'open',
+      currentCheckId: replay.currentCheckId,
+      conclusion: d.conclusion
+        ? { findingCheckId: d.conclusion.findingCheckId, note: d.conclusion.note, parts: d.conclusion.parts, labourMinutes: d.conclusion.labourMinutes }
+        : null,
+      abandonReason: null,
+      startedAt,
+      endedAt: d.conclusion ? addMinutes(startedAt, d.conclusion.atMin) : null,
+    });
+    await tx.getRepository(DiagnosisStep).insert(
+      replay.steps.map((s) => ({
+        shopId,
+        diagnosisId: diagnosis.id,
+        seq: s.seq,
+        checkId: s.checkId,
+        readingText: s.readingText,
+        valueSi: s.valueSi,
+        overRange: s.overRange,
+        verdict: s.verdict,
+        choiceId: s.choiceId,
+        evaluation: s.evaluation,
+        nextCheckId: s.nextCheckId,
+        note: s.note,
+        byId: by.id,
+        recordedAt: addMinutes(startedAt, s.atMin),
+        retracted: s.retractedAtMin !== null,
+        retractedAt: s.retractedAtMin === null ? null : addMinutes(startedAt, s.retractedAtMin),
+        idempotencyKey: null,
+      })),
+    );
+  }
+}

@@ -1,0 +1,356 @@
+import type { ProcedureDocument } from '@shared/engine/procedure';
+import { CAUTION } from './cautions';
+
+/**
+ * Demo content, invented for the demo shop: the Veltro twins, their CDI pinout, wire colours and every
+ * window below are made up. The orders of magnitude follow common trade practice (pulse coil a few hundred
+ * ohms and a few volts AC peak while cranking, coil primary well under an ohm, diode drop 0.4–0.8 V).
+ *
+ * CDI 8-pin connector, harness side: 1 black/white switched supply · 2 green ground · 3 blue/yellow and
+ * 4 green/white pulse coil · 5 light green/red interlock input · 6 black/yellow coil 1 (left) · 7 black/red
+ * coil 2 (right) · 8 grey tachometer.
+ */
+const CDI = 'CDI 8-pin connector (under the seat)';
+
+export const noSparkTwinCdi: ProcedureDocument = {
+  startCheckId: 'spark-test',
+  cautions: [CAUTION.manualFirst, CAUTION.highVoltage, CAUTION.fuelVapour, CAUTION.hydrogen, CAUTION.cranking, CAUTION.ignitionOffUnplug],
+  checks: [
+    {
+      id: 'spark-test',
+      kind: 'observe',
+      title: 'Spark at both plug leads',
+      instruction:
+        'Take both plugs out and keep them away from the plug holes. Fit the adjustable spark tester (gap 6 mm) to each plug cap in turn and clip it to the cylinder head. Neutral, side stand up, clutch lever pulled in. Crank and watch the tester window.',
+      cautions: [CAUTION.highVoltage, CAUTION.fuelVapour, CAUTION.cranking],
+      choices: [
+        { id: 'both', label: 'Strong blue spark on both cylinders', next: 'finding-spark-present' },
+        { id: 'one', label: 'Spark on one cylinder only', next: 'finding-coil' },
+        { id: 'none', label: 'No spark on either cylinder', next: 'battery-volts' },
+      ],
+    },
+    {
+      id: 'battery-volts',
+      kind: 'measure',
+      title: 'Battery voltage at rest',
+      instruction:
+        'Ignition off. Red probe on the battery positive post, black on the negative post. Below 12.2 V the engine may crank too slowly for the CDI to fire.',
+      probe: { connector: 'Battery posts', wireColours: ['red', 'black'] },
+      cautions: [CAUTION.hydrogen],
+      quantity: 'voltage_dc',
+      meterFunction: 'dc_volts',
+      spec: { kind: 'at_least', min: 12.2, unit: 'V' },
+      outcomes: { in_spec: 'cdi-supply', low: 'finding-battery-low' },
+    },
+    {
+      id: 'cdi-supply',
+      kind: 'measure',
+      title: 'Switched supply at the CDI',
+      instruction:
+        'Leave the CDI plugged in. Ignition on, kill switch at RUN. Back-probe pin 1 (black/white) with a pin probe and put the black probe on the battery negative post.',
+      probe: { connector: CDI, pins: ['1'], wireColours: ['black/white'] },
+      quantity: 'voltage_dc',
+      meterFunction: 'dc_volts',
+      spec: { kind: 'at_least', min: 11.5, unit: 'V' },
+      outcomes: { in_spec: 'interlock-ground', low: 'fuse-ignition' },
+    },
+    {
+      id: 'fuse-ignition',
+      kind: 'measure',
+      title: 'Ignition fuse (10 A)',
+      instruction:
+        'Ignition off. Pull the 10 A IGNITION fuse from the fuse box under the seat and measure across its blades out of the holder. Null the leads first (REL).',
+      probe: { connector: 'Fuse box, IGNITION 10 A' },
+      cautions: [CAUTION.powerOffOhms],
+      quantity: 'continuity',
+      meterFunction: 'ohms',
+      spec: { kind: 'expect_continuity', max: 0.5, unit: 'Ω' },
+      outcomes: { in_spec: 'finding-supply-circuit', high: 'finding-fuse', open: 'finding-fuse' },
+    },
+    {
+      id: 'interlock-ground',
+      kind: 'measure',
+      title: 'Interlock input pulled to ground (neutral)',
+      instruction:
+        'Ignition on, kill switch at RUN, gearbox in neutral (neutral light on). Back-probe CDI pin 5 (light green/red) to the battery negative post. The neutral switch grounds this input through the interlock diode, so expect about one diode drop.',
+      probe: { connector: CDI, pins: ['5'], wireColours: ['light green/red'] },
+      quantity: 'voltage_dc',
+      meterFunction: 'dc_volts',
+      spec: { kind: 'at_most', max: 1.0, unit: 'V' },
+      outcomes: { in_spec: 'sensor-resistance', high: 'diode-forward' },
+    },
+    {
+      id: 'diode-forward',
+      kind: 'measure',
+      title: 'Interlock diode, forward',
+      instruction:
+        'Ignition off, battery negative off. Unplug the diode block D-2 under the seat. Meter on diode test: red probe on pin A (light blue, neutral switch side), black probe on pin K (light green/red, CDI side).',
+      probe: { connector: 'Diode block D-2 (3-pin)', pins: ['A', 'K'], wireColours: ['light blue', 'light green/red'] },
+      cautions: [CAUTION.powerOffOhms],
+      quantity: 'diode',
+      meterFunction: 'diode',
+      spec: { kind: 'window', min: 0.4, max: 0.8, unit: 'V' },
+      outcomes: { in_spec: 'diode-reverse', low: 'finding-diode', high: 'finding-diode', open: 'finding-diode' },
+    },
+    {
+      id: 'diode-reverse',
+      kind: 'measure',
+      title: 'Interlock diode, reverse',
+      instruction: 'Swap the probes: red on pin K, black on pin A. A good diode reads OL this way; a leaky one shows a voltage.',
+      probe: { connector: 'Diode block D-2 (3-pin)', pins: ['K', 'A'] },
+      cautions: [CAUTION.powerOffOhms],
+      quantity: 'diode',
+      meterFunction: 'diode',
+      spec: { kind: 'ratio', pairWith: 'diode-forward', minRatio: 4 },
+      outcomes: { in_spec: 'finding-interlock-circuit', low: 'finding-diode', open: 'finding-diode' },
+    },
+    {
+      id: 'sensor-resistance',
+      kind: 'measure',
+      title: 'Pulse coil resistance',
+      instruction:
+        'Ignition off, battery negative off. Unplug the pulse coil connector P-2 at the left engine cover and measure on the coil side. Measure with the engine cold: the window is for the coil at 20 °C and is corrected to the ambient temperature. If the reading comes out marginal, clean the pins with contact cleaner, null the leads and press the probes firmly before measuring again.',
+      probe: { connector: 'Pulse coil connector P-2 (2-pin, coil side)', pins: ['1', '2'], wireColours: ['blue/yellow', 'green/white'] },
+      cautions: [CAUTION.powerOffOhms],
+      quantity: 'resistance',
+      meterFunction: 'ohms',
+      range: 600,
+      spec: { kind: 'window', min: 360, max: 440, unit: 'Ω', copperAt20C: true },
+      marginalPolicy: 'branch',
+      retest: { maxVisits: 2, whenExhausted: 'sensor-to-ground' },
+      outcomes: {
+        in_spec: 'sensor-to-ground',
+        low: 'finding-pulse-coil',
+        high: 'finding-pulse-coil',
+        open: 'finding-pulse-coil',
+        marginal: 'sensor-resistance',
+      },
+    },
+    {
+      id: 'sensor-to-ground',
+      kind: 'measure',
+      title: 'Pulse coil insulation to ground',
+      instruction: 'Still unplugged: one probe on pin 1 of the coil side, the other on bare metal of the engine case.',
+      probe: { connector: 'Pulse coil connector P-2 (2-pin, coil side)', pins: ['1'], wireColours: ['blue/yellow'] },
+      cautions: [CAUTION.powerOffOhms],
+      quantity: 'resistance',
+      meterFunction: 'ohms',
+      spec: { kind: 'expect_open', openAbove: 1e6, unit: 'Ω' },
+      outcomes: { in_spec: 'sensor-ac', low: 'finding-pulse-coil' },
+    },
+    {
+      id: 'sensor-ac',
+      kind: 'measure',
+      title: 'Pulse coil output while cranking',
+      instruction:
+        'Battery negative back on. Both spark testers on the plug caps — never crank with a cap hanging free. Pulse coil still unplugged; peak-voltage adapter on the meter, AC volts, across the coil-side pins. Crank for 3–5 s and read the highest value.',
+      probe: { connector: 'Pulse coil connector P-2 (2-pin, coil side)', pins: ['1', '2'], wireColours: ['blue/yellow', 'green/white'] },
+      cautions: [CAUTION.cranking, CAUTION.highVoltage, CAUTION.fuelVapour],
+      quantity: 'voltage_ac',
+      meterFunction: 'ac_volts',
+      spec: { kind: 'at_least', min: 2.0, unit: 'V' },
+      outcomes: { in_spec: 'cdi-sensor-ac', low: 'finding-pulse-coil' },
+    },
+    {
+      id: 'cdi-sensor-ac',
+      kind: 'measure',
+      title: 'Pulse signal arriving at the CDI',
+      instruction:
+        'Plug the pulse coil connector back in. Back-probe CDI pins 3 and 4 with the CDI plugged in, peak adapter as before, and crank for 3–5 s. The signal must arrive within 15 % of what the coil gave at its own connector.',
+      probe: { connector: CDI, pins: ['3', '4'], wireColours: ['blue/yellow', 'green/white'] },
+      cautions: [CAUTION.cranking, CAUTION.highVoltage, CAUTION.fuelVapour],
+      quantity: 'voltage_ac',
+      meterFunction: 'ac_volts',
+      spec: { kind: 'agree_with', checkId: 'sensor-ac', tolPct: 15, unit: 'V' },
+      outcomes: { in_spec: 'cdi-pin-ground', low: 'finding-sensor-harness', high: 'cdi-pin-ground' },
+    },
+    {
+      id: 'cdi-pin-ground',
+      kind: 'measure',
+      title: 'CDI chart: pin 2 to battery negative',
+      instruction:
+        'Ignition off, battery negative off, CDI unplugged. Harness side: pin 2 (green) to the battery negative cable terminal. Null the leads first.',
+      probe: { connector: `${CDI}, harness side`, pins: ['2'], wireColours: ['green'] },
+      cautions: [CAUTION.ignitionOffUnplug, CAUTION.powerOffOhms],
+      quantity: 'continuity',
+      meterFunction: 'ohms',
+      spec: { kind: 'expect_continuity', max: 0.5, unit: 'Ω' },
+      outcomes: { in_spec: 'cdi-pin-coil1', high: 'finding-cdi-ground', open: 'finding-cdi-ground' },
+    },
+    {
+      id: 'cdi-pin-coil1',
+      kind: 'measure',
+      title: 'CDI chart: pin 6 to pin 2 (coil 1 primary)',
+      instruction: 'Harness side, CDI unplugged: pin 6 (black/yellow) to pin 2 (green). This reads the left coil primary through its wire.',
+      probe: { connector: `${CDI}, harness side`, pins: ['6', '2'], wireColours: ['black/yellow', 'green'] },
+      cautions: [CAUTION.powerOffOhms],
+      quantity: 'resistance',
+      meterFunction: 'ohms',
+      range: 60,
+      spec: { kind: 'window', min: 0.2, max: 0.8, unit: 'Ω', copperAt20C: true },
+      outcomes: { in_spec: 'cdi-pin-coil2', low: 'finding-coil-primary-circuit', high: 'finding-coil-primary-circuit', open: 'finding-coil-primary-circuit' },
+    },
+    {
+      id: 'cdi-pin-coil2',
+      kind: 'measure',
+      title: 'CDI chart: pin 7 to pin 2 (coil 2 primary)',
+      instruction: 'Harness side, CDI unplugged: pin 7 (black/red) to pin 2 (green). This reads the right coil primary through its wire.',
+      probe: { connector: `${CDI}, harness side`, pins: ['7', '2'], wireColours: ['black/red', 'green'] },
+      cautions: [CAUTION.powerOffOhms],
+      quantity: 'resistance',
+      meterFunction: 'ohms',
+      range: 60,
+      spec: { kind: 'window', min: 0.2, max: 0.8, unit: 'Ω', copperAt20C: true },
+      outcomes: { in_spec: 'cdi-pin-sensor', low: 'finding-coil-primary-circuit', high: 'finding-coil-primary-circuit', open: 'finding-coil-primary-circuit' },
+    },
+    {
+      id: 'cdi-pin-sensor',
+      kind: 'measure',
+      title: 'CDI chart: pin 3 to pin 4 (pulse coil through the harness)',
+      instruction:
+        'Harness side, CDI unplugged, pulse coil plugged in: pin 3 (blue/yellow) to pin 4 (green/white). This is the pulse coil seen through its harness; the two wires add only about 0.1 Ω, so a reading above the coil’s own window means a bad terminal on the way.',
+      probe: { connector: `${CDI}, harness side`, pins: ['3', '4'], wireColours: ['blue/yellow', 'green/white'] },
+      cautions: [CAUTION.powerOffOhms],
+      quantity: 'resistance',
+      meterFunction: 'ohms',
+      range: 600,
+      spec: { kind: 'window', min: 360, max: 440, unit: 'Ω', copperAt20C: true },
+      outcomes: { in_spec: 'replace-cdi', low: 'finding-sensor-harness', high: 'finding-sensor-harness', open: 'finding-sensor-harness' },
+    },
+    {
+      id: 'replace-cdi',
+      kind: 'task',
+      title: 'Fit the shop’s known-good CDI',
+      instruction:
+        'Ignition off, battery negative off. Plug the shop’s test CDI for the Veltro twins into the harness (don’t bolt it down yet). Battery negative back on last.',
+      cautions: [CAUTION.ignitionOffUnplug, CAUTION.hydrogen],
+      next: 'prove-spark',
+    },
+    {
+      id: 'prove-spark',
+      kind: 'observe',
+      title: 'Spark with the known-good CDI',
+      instruction: 'Spark testers on both caps as in the first check. Neutral, side stand up, clutch in; crank and watch both testers.',
+      cautions: [CAUTION.highVoltage, CAUTION.fuelVapour, CAUTION.cranking],
+      choices: [
+        { id: 'spark', label: 'Spark on both cylinders now', next: 'finding-cdi' },
+        { id: 'none', label: 'Still no spark', next: 'finding-not-isolated' },
+      ],
+    },
+    {
+      id: 'finding-spark-present',
+      kind: 'finding',
+      title: 'Ignition delivers spark',
+      instruction: 'The ignition works at this test; the no-start is elsewhere.',
+      finding: { part: 'None in the ignition system', action: 'Go on to fuel delivery, the plugs themselves and compression.' },
+    },
+    {
+      id: 'finding-coil',
+      kind: 'finding',
+      title: 'Coil, lead or cap of the dead cylinder',
+      instruction: 'With spark on one cylinder, the CDI, pulse coil and interlocks are working.',
+      finding: {
+        part: 'Ignition coil, plug lead or plug cap of the cylinder without spark',
+        action: 'Swap the coils left and right: if the fault follows the coil, replace it. Otherwise measure the plug cap (about 5 kΩ) and the coil primary wire to the CDI.',
+      },
+    },
+    {
+      id: 'finding-battery-low',
+      kind: 'finding',
+      title: 'Battery too low to fire the CDI',
+      instruction: 'The battery is below the level this procedure needs.',
+      finding: { part: 'Battery (low charge)', action: 'Charge and load-test the battery, then repeat this diagnosis. A slow crank can be too slow for the CDI to fire.' },
+    },
+    {
+      id: 'finding-fuse',
+      kind: 'finding',
+      title: 'Ignition fuse open or corroded',
+      instruction: 'The 10 A IGNITION fuse does not pass current.',
+      finding: {
+        part: 'Ignition fuse 10 A (and holder)',
+        action: 'If the fuse blew, find the short before fitting a new one: measure the fused circuit to ground with the fuse out. Clean a corroded holder.',
+      },
+    },
+    {
+      id: 'finding-supply-circuit',
+      kind: 'finding',
+      title: 'Supply lost between the fuse and the CDI',
+      instruction: 'The fuse is good but the supply does not reach CDI pin 1.',
+      finding: {
+        part: 'Ignition switch, kill switch or the black/white supply wire',
+        action: 'Check the kill switch and ignition switch contacts, then the black/white wire and its connectors to CDI pin 1. Repair and re-test the supply at pin 1.',
+      },
+    },
+    {
+      id: 'finding-diode',
+      kind: 'finding',
+      title: 'Interlock diode faulty',
+      instruction: 'The diode does not read one way only.',
+      finding: { part: 'Diode block D-2', action: 'Replace the diode block. Afterwards check the neutral light and the side-stand cut-out.' },
+    },
+    {
+      id: 'finding-interlock-circuit',
+      kind: 'finding',
+      title: 'Neutral switch or interlock wire',
+      instruction: 'The diode is good but the interlock input is not pulled to ground in neutral.',
+      finding: {
+        part: 'Neutral switch or the light blue / light green-red interlock wires',
+        action: 'Measure the neutral switch to the engine case in neutral (continuity expected); repair the wire or replace the switch and its sealing washer.',
+      },
+    },
+    {
+      id: 'finding-pulse-coil',
+      kind: 'finding',
+      title: 'Pulse coil faulty',
+      instruction: 'The pulse coil is out of its window, leaks to ground or gives too little output.',
+      finding: {
+        part: 'Pulse coil (crank sensor)',
+        action: 'Before replacing, look for metal debris on the coil face and a damaged reluctor on the rotor. Replace the coil, set its air gap with a feeler gauge and repeat the output test.',
+      },
+    },
+    {
+      id: 'finding-sensor-harness',
+      kind: 'finding',
+      title: 'Pulse coil harness fault',
+      instruction: 'The coil is good at its own connector but its signal does not reach the CDI intact.',
+      finding: {
+        part: 'Pulse coil harness between connector P-2 and the CDI (blue/yellow, green/white)',
+        action: 'Look for chafing and shorts to the frame, especially where the harness crosses the frame under the tank, and for corroded terminals. Repair and re-test the signal at the CDI.',
+      },
+    },
+    {
+      id: 'finding-cdi-ground',
+      kind: 'finding',
+      title: 'CDI ground poor',
+      instruction: 'CDI pin 2 does not reach the battery negative cleanly.',
+      finding: { part: 'CDI ground (green wire and its frame eyelet)', action: 'Clean and re-torque the ground eyelet on the frame; repair the green wire. Re-test pin 2.' },
+    },
+    {
+      id: 'finding-coil-primary-circuit',
+      kind: 'finding',
+      title: 'Coil primary circuit out of range',
+      instruction: 'A coil primary reads wrong through its wire from the CDI.',
+      finding: {
+        part: 'Ignition coil primary or its wire to the CDI',
+        action: 'Measure the coil primary at its own terminals to split the coil from the wire; replace the coil or repair the wire.',
+      },
+    },
+    {
+      id: 'finding-cdi',
+      kind: 'finding',
+      title: 'CDI unit faulty',
+      instruction: 'Every input was in spec and a known-good CDI brought the spark back.',
+      finding: { part: 'CDI unit', action: 'Fit a new CDI unit, prove spark on both cylinders and a start, and tag the old unit for the warranty claim.' },
+    },
+    {
+      id: 'finding-not-isolated',
+      kind: 'finding',
+      title: 'Not isolated by this procedure',
+      instruction: 'Every reading was in spec and a known-good CDI did not bring the spark back.',
+      finding: {
+        part: 'Not yet known',
+        action: 'Look for an intermittent: wiggle-test the harness while cranking, check the CDI connector for spread terminals, and ask the lead technician.',
+      },
+    },
+  ],
+};
