@@ -6,7 +6,7 @@ import type { When } from './time';
  * `vinCheckDigit`); the mower, like most small engines, has none.
  */
 
-export type DemoJobKey = 'tessa-no-start' | 'ridgeline-flat' | 'strada-drain' | 'corsa-no-crank' | 'ridgeline-headlight' | 'corsa-drain' | 'mower-no-start';
+export type DemoJobKey = 'tessa-no-start' | 'fellrunner-flat' | 'marra-drain' | 'wren-no-crank' | 'fellrunner-headlight' | 'wren-drain' | 'mower-no-start';
 
 export interface DemoMachine {
   make: string;
@@ -42,8 +42,8 @@ export const DEMO_JOBS: readonly DemoJob[] = [
     booked: { daysAgo: 16, hour: 8, minute: 40 },
   },
   {
-    key: 'ridgeline-flat',
-    machine: { make: 'Nordane', model: 'Ridgeline 570', year: 2019, engine: '567 cc single, 3-phase charging', vin: '5NDR57XA4KN200934', mileage: 6_120, mileageUnit: 'km' },
+    key: 'fellrunner-flat',
+    machine: { make: 'Nordane', model: 'Fellrunner 570', year: 2019, engine: '567 cc single, 3-phase charging', vin: '5NDF57XA0KN200934', mileage: 6_120, mileageUnit: 'km' },
     customerName: 'Bram Visser',
     customerContact: '07700 900257',
     customerEmail: 'bram@vissersfarm.example',
@@ -52,8 +52,8 @@ export const DEMO_JOBS: readonly DemoJob[] = [
     booked: { daysAgo: 9, hour: 14, minute: 50 },
   },
   {
-    key: 'strada-drain',
-    machine: { make: 'Veltro', model: 'Strada 650', year: 2018, engine: '649 cc parallel twin, fuel injected', vin: '7VLST65A1JK108452', mileage: 21_975, mileageUnit: 'km' },
+    key: 'marra-drain',
+    machine: { make: 'Veltro', model: 'Marra 650', year: 2018, engine: '649 cc parallel twin, fuel injected', vin: '7VLMR65A2JK108452', mileage: 21_975, mileageUnit: 'km' },
     customerName: 'Lucía Fenwick',
     customerContact: '07700 900633',
     customerEmail: 'lucia.fenwick@example.com',
@@ -62,8 +62,8 @@ export const DEMO_JOBS: readonly DemoJob[] = [
     booked: { daysAgo: 4, hour: 9, minute: 30 },
   },
   {
-    key: 'corsa-no-crank',
-    machine: { make: 'Pippit', model: 'Corsa 150', year: 2021, engine: '149 cc single, CVT', vin: '3PPC15SC2MC300418', mileage: 9_840, mileageUnit: 'km' },
+    key: 'wren-no-crank',
+    machine: { make: 'Pippit', model: 'Wren 150', year: 2021, engine: '149 cc single, CVT', vin: '3PPW15SC6MC300418', mileage: 9_840, mileageUnit: 'km' },
     customerName: 'Ade Kowalczyk',
     customerContact: '07700 900781',
     customerEmail: 'ade.k@example.com',
@@ -72,8 +72,8 @@ export const DEMO_JOBS: readonly DemoJob[] = [
     booked: { minutesAgo: 75 },
   },
   {
-    key: 'ridgeline-headlight',
-    machine: { make: 'Nordane', model: 'Ridgeline 450', year: 2017, engine: '449 cc single', vin: '5NDR45XA5HN201266', mileage: 11_300, mileageUnit: 'km' },
+    key: 'fellrunner-headlight',
+    machine: { make: 'Nordane', model: 'Fellrunner 450', year: 2017, engine: '449 cc single', vin: '5NDF45XA1HN201266', mileage: 11_300, mileageUnit: 'km' },
     customerName: 'Harriet Quayle',
     customerContact: '07700 900129',
     customerEmail: 'hq@quaylestables.example',
@@ -82,8 +82,8 @@ export const DEMO_JOBS: readonly DemoJob[] = [
     booked: { daysAgo: 1, hour: 16, minute: 10 },
   },
   {
-    key: 'corsa-drain',
-    machine: { make: 'Pippit', model: 'Corsa 125', year: 2020, engine: '124 cc single, CVT', vin: '3PPC12SC0LC301077', mileage: 14_205, mileageUnit: 'km' },
+    key: 'wren-drain',
+    machine: { make: 'Pippit', model: 'Wren 125', year: 2020, engine: '124 cc single, CVT', vin: '3PPW12SC4LC301077', mileage: 14_205, mileageUnit: 'km' },
     customerName: 'Noor Castellane',
     customerContact: '07700 900564',
     customerEmail: 'noor.castellane@example.com',

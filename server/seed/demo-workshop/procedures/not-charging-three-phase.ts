@@ -171,7 +171,7 @@ export const notChargingThreePhase: ProcedureDocument = {
       id: 'replace-regulator',
       kind: 'task',
       title: 'Fit a known-good regulator/rectifier',
-      instruction: 'Battery negative off. Fit the shop’s test regulator for the Ridgeline, plug it in, battery negative back on last.',
+      instruction: 'Battery negative off. Fit the shop’s test regulator for the Fellrunner, plug it in, battery negative back on last.',
       cautions: [CAUTION.hydrogen],
       next: 'prove-charging',
     },
