@@ -123,6 +123,24 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
   });
 });
 
+describe('keyboard use', () => {
+  it('Tab moves through the sign-in form and the focused button shows a ring; Enter submits', async () => {
+    const { context, page } = await openPage(browser, server.url, 'desk');
+    await page.goto('/sign-in');
+    await page.getByTestId('sign-in-email').fill(demo('tech').email);
+    await page.getByTestId('sign-in-password').fill(DEMO_PASSWORD);
+    await page.keyboard.press('Tab');
+    await page.keyboard.press('Tab');
+    const focused = page.getByTestId('sign-in-submit');
+    expect(await focused.evaluate((el) => el === document.activeElement && el.matches(':focus-visible'))).toBe(true);
+    expect(await focused.evaluate((el) => getComputedStyle(el).outlineStyle)).toBe('solid');
+    await shot(page, 'desk', 'sign-in-keyboard-focus');
+    await page.keyboard.press('Enter');
+    await page.waitForURL('**/bench');
+    await context.close();
+  });
+});
+
 describe('forgotten password', () => {
   it.each(Object.keys(SIZES) as Size[])('at %s size: ask for a link, follow it from the mail, set a new password, sign in with it', async (size) => {
     const member = demo(size === 'phone' ? 'apprentice' : 'tech');

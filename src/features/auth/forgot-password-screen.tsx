@@ -26,8 +26,7 @@ export function ForgotPasswordScreen() {
       {sentTo ? (
         <View style={styles.form} role="status" testID="forgot-password-sent">
           <Text>
-            If {sentTo} belongs to a Probepath member, a link to choose a new password is on its way. Open it on this
-            device.
+            If {sentTo} belongs to a Probepath member, a link to choose a new password is on its way.
           </Text>
           <Text tone="textMuted">No mail after a few minutes? Ask your shop owner: they can read the shop&apos;s sent mail in the Outbox.</Text>
           <Button testID="forgot-password-back" label="Back to sign in" variant="primary" onPress={() => router.replace('/sign-in')} />
