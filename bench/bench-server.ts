@@ -63,6 +63,8 @@ async function main() {
   const server = app.listen(0, '127.0.0.1', () => console.log(JSON.stringify({ port: (server.address() as AddressInfo).port, token: tech, idFile })));
 }
 
+process.on('SIGINT', () => process.exit(0));
+
 main().catch((err) => {
   console.error(err);
   process.exit(1);

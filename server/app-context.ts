@@ -1,3 +1,4 @@
+import type { KeyObject } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import type { Logger } from 'pino';
 import type { Config } from './config';
@@ -14,7 +15,8 @@ export interface AppContext {
   config: Config;
   mailer: Mailer;
   log: Logger;
-  jwtSecret: string;
+  /** HMAC key of session tokens. */
+  jwtKey: KeyObject;
   /** Base of links in e-mail: PUBLIC_URL, or the address the server listens on. */
   publicUrl(): string;
 }

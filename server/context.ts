@@ -31,7 +31,8 @@ export async function createRuntime(config: Config, ds: DataSource): Promise<Run
     config,
     mailer,
     log,
-    jwtSecret: config.jwtSecret ?? persistentSecret(config.dataDir),
+    // A KeyObject, not a string: jsonwebtoken otherwise tries (and fails) to parse a string as a PEM key on every verify.
+    jwtKey: crypto.createSecretKey(Buffer.from(config.jwtSecret ?? persistentSecret(config.dataDir))),
     publicUrl: () => config.publicUrl ?? listenUrl,
   };
   return {

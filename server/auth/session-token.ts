@@ -10,7 +10,7 @@ interface Claims {
 }
 
 export function issueSession(ctx: AppContext, user: User & { shop: { name: string } }): SignInResponse {
-  const token = jwt.sign({ shop: user.shopId } satisfies Omit<Claims, 'sub'>, ctx.jwtSecret, {
+  const token = jwt.sign({ shop: user.shopId } satisfies Omit<Claims, 'sub'>, ctx.jwtKey, {
     subject: user.id,
     expiresIn: ctx.config.jwtTtl as jwt.SignOptions['expiresIn'],
     algorithm: 'HS256',
@@ -22,7 +22,7 @@ export function issueSession(ctx: AppContext, user: User & { shop: { name: strin
 /** Returns the claims, or null for a missing, tampered, expired or malformed token. */
 export function readSessionToken(ctx: AppContext, token: string): Claims | null {
   try {
-    const claims = jwt.verify(token, ctx.jwtSecret, { algorithms: ['HS256'] });
+    const claims = jwt.verify(token, ctx.jwtKey, { algorithms: ['HS256'] });
     if (typeof claims !== 'object' || typeof claims.sub !== 'string' || typeof claims.shop !== 'string') return null;
     return { sub: claims.sub, shop: claims.shop };
   } catch {

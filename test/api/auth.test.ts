@@ -52,7 +52,7 @@ describe('session tokens', () => {
   it('refuses an expired token', async () => {
     const valid = await h.tokenFor('tech');
     const claims = jwt.decode(valid) as { sub: string; shop: string };
-    const expired = jwt.sign({ shop: claims.shop, exp: Math.floor(Date.now() / 1000) - 60 }, h.runtime.ctx.jwtSecret, { subject: claims.sub });
+    const expired = jwt.sign({ shop: claims.shop, exp: Math.floor(Date.now() / 1000) - 60 }, h.runtime.ctx.jwtKey, { subject: claims.sub });
     const res = await me(expired);
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBe('invalid_token');
@@ -72,7 +72,7 @@ describe('session tokens', () => {
   it('refuses a token whose shop claim does not match the member', async () => {
     const claims = jwt.decode(await h.tokenFor('lead')) as { sub: string };
     const other = jwt.decode(await h.otherShopToken()) as { shop: string };
-    const crossed = jwt.sign({ shop: other.shop }, h.runtime.ctx.jwtSecret, { subject: claims.sub, expiresIn: '1h' });
+    const crossed = jwt.sign({ shop: other.shop }, h.runtime.ctx.jwtKey, { subject: claims.sub, expiresIn: '1h' });
     expect((await me(crossed)).status).toBe(401);
   });
 });
