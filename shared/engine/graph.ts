@@ -147,15 +147,16 @@ export function immediateDominators(g: Graph, root: number): Int32Array {
  */
 export function dominanceQuery(idom: Int32Array, root: number): (a: number, b: number) => boolean {
   const n = idom.length;
-  const childFrom: number[] = [];
-  const childTo: number[] = [];
+  const childFrom = new Int32Array(n);
+  const childTo = new Int32Array(n);
+  let children = 0;
   for (let v = 0; v < n; v++) {
     if (v !== root && idom[v] !== -1) {
-      childFrom.push(idom[v]);
-      childTo.push(v);
+      childFrom[children] = idom[v];
+      childTo[children++] = v;
     }
   }
-  const tree = buildGraph(n, childFrom, childTo);
+  const tree = buildGraph(n, childFrom.subarray(0, children), childTo.subarray(0, children));
   const enter = new Int32Array(n).fill(-1);
   const exit = new Int32Array(n).fill(-1);
   const stackNode = new Int32Array(n);

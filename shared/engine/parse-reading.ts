@@ -106,7 +106,7 @@ export function parseReading(text: string, quantity: Quantity): ParseResult {
   if (text.length > MAX_TEXT_LENGTH) {
     return fail(`That is too long for a meter reading. Type just the number and unit, e.g. ${info.example}.`);
   }
-  const s = isAscii(text) ? text : text.normalize('NFKC');
+  const s = needsNormalizing(text) ? text.normalize('NFKC') : text;
   let start = 0;
   let end = s.length;
   while (start < end && isSpace(s.charCodeAt(start))) start++;
@@ -260,8 +260,29 @@ function parseOverRange(
 
 type UnitParse = { ok: true; unit: UnitMatch | null; acdc: 'ac' | 'dc' | undefined } | ParseFailure;
 
-/** Reads "kΩ", "mV DC", "V~", "ohms" … and checks it fits the quantity. */
+/**
+ * Unit texts repeat endlessly ("kΩ", "V", "mA"), so their parses are remembered per quantity. Bounded, so
+ * arbitrary input can't grow it without limit; results are never mutated.
+ */
+const UNIT_CACHE_LIMIT = 512;
+const unitCache = new Map<Quantity, Map<string, UnitParse>>();
+
 function parseUnitText(raw: string, info: QuantityInfo, quantity: Quantity): UnitParse {
+  let cache = unitCache.get(quantity);
+  if (cache === undefined) {
+    cache = new Map();
+    unitCache.set(quantity, cache);
+  }
+  let parsed = cache.get(raw);
+  if (parsed === undefined) {
+    parsed = parseUnitTextUncached(raw, info, quantity);
+    if (cache.size < UNIT_CACHE_LIMIT) cache.set(raw, parsed);
+  }
+  return parsed;
+}
+
+/** Reads "kΩ", "mV DC", "V~", "ohms" … and checks it fits the quantity. */
+function parseUnitTextUncached(raw: string, info: QuantityInfo, quantity: Quantity): UnitParse {
   const compact = hasSpace(raw) ? raw.replace(/\s+/g, '') : raw;
   for (let k = 0; k < compact.length; k++) {
     const code = compact.charCodeAt(k);
@@ -374,9 +395,18 @@ function fail(message: string): ParseFailure {
   return { ok: false, message };
 }
 
-function isAscii(s: string): boolean {
-  for (let i = 0; i < s.length; i++) if (s.charCodeAt(i) > 127) return false;
-  return true;
+/**
+ * Characters NFKC leaves unchanged that readings often carry (Ω U+03A9, μ U+03BC, °, −, ∞, ⎓). Text made only
+ * of these and ASCII skips normalisation, which is by far the slowest step of a parse.
+ */
+const NFKC_STABLE = new Set([0x03a9, 0x03c9, 0x03bc, 0x00b0, 0x2212, 0x221e, 0x2393]);
+
+function needsNormalizing(s: string): boolean {
+  for (let i = 0; i < s.length; i++) {
+    const c = s.charCodeAt(i);
+    if (c > 127 && !NFKC_STABLE.has(c)) return true;
+  }
+  return false;
 }
 
 function isSpace(c: number): boolean {

@@ -3,6 +3,7 @@ import { marginalPolicyOf, requiredVerdicts } from './outcomes';
 import type { Check, MeasureCheck, ProcedureDocument } from './procedure';
 import { QUANTITY_INFO } from './quantity';
 import { referencedCheckId, type Spec } from './spec';
+import { IdIndex } from './id-index';
 import { formatValue } from './units';
 import { VERDICTS } from './verdict';
 import { isValidGauge } from './wire';
@@ -48,53 +49,77 @@ export function validateProcedure(document: ProcedureDocument): ValidationProble
   const checks = document.checks;
   const n = checks.length;
 
-  const indexById = new Map<string, number>();
+  const indexById = new IdIndex(n, (i) => checks[i].id);
+  const duplicate = new Uint8Array(n);
   for (let i = 0; i < n; i++) {
-    const id = checks[i].id;
-    if (indexById.has(id)) report(id, 'duplicate_id', `Two checks share the id “${id}”. Give each check its own id.`);
-    else indexById.set(id, i);
+    if (indexById.add(i) !== -1) {
+      duplicate[i] = 1;
+      report(checks[i].id, 'duplicate_id', `Two checks share the id “${checks[i].id}”. Give each check its own id.`);
+    }
   }
 
   // Edges of the procedure as written, and where each re-test check sends a walk once its visits run out.
-  const from: number[] = [];
-  const to: number[] = [];
+  // Typed arrays grown by doubling: a 20,000-check document is read once, not once more to count its edges.
+  let from: Int32Array = new Int32Array(n * 3 + 8);
+  let to: Int32Array = new Int32Array(n * 3 + 8);
+  let m = 0;
   const exhaustTo = new Int32Array(n).fill(-1);
-  const follow = (check: Check, i: number, target: string, what: string) => {
+  /** Measure checks whose spec compares with an earlier reading, checked once dominators are known. */
+  const referring: { i: number; check: MeasureCheck; refId: string }[] = [];
+  // `label` names the edge in a message: a verdict, a choice label, or '' for a task's next step.
+  const follow = (check: Check, i: number, target: string, label: string) => {
     const j = indexById.get(target);
-    if (j === undefined) {
+    if (j === -1) {
+      const what = check.kind === 'measure' ? `The ${label.replace('_', ' ')} outcome` : check.kind === 'observe' ? `The choice “${label}”` : 'The next step';
       report(check.id, 'dangling_outcome', `${what} leads to “${target}”, which doesn't exist. Point it at an existing check or add “${target}”.`);
-    } else {
-      from.push(i);
-      to.push(j);
+      return;
     }
+    if (m === from.length) {
+      from = grow(from);
+      to = grow(to);
+    }
+    from[m] = i;
+    to[m++] = j;
   };
 
   for (let i = 0; i < n; i++) {
+    if (duplicate[i] === 1) continue;
     const check = checks[i];
-    if (indexById.get(check.id) !== i) continue; // a duplicate; reported above
     switch (check.kind) {
-      case 'measure':
-        for (const verdict of VERDICTS) {
-          const target = check.outcomes[verdict];
-          if (target !== undefined) follow(check, i, target, `The ${verdict.replace('_', ' ')} outcome`);
+      case 'measure': {
+        let present = 0;
+        for (let v = 0; v < VERDICTS.length; v++) {
+          const target = check.outcomes[VERDICTS[v]];
+          if (target !== undefined) {
+            present |= 1 << v;
+            follow(check, i, target, VERDICTS[v]);
+          }
         }
-        checkOutcomesComplete(check, document, report);
+        checkOutcomesComplete(check, present, document, report);
         checkSpec(check, report);
+        const refId = referencedCheckId(check.spec);
+        if (refId !== null) referring.push({ i, check, refId });
         break;
+      }
       case 'observe': {
-        if (check.choices.length === 0) {
+        const choices = check.choices;
+        if (choices.length === 0) {
           report(check.id, 'dead_end', 'This observation has no choices, so a diagnosis stops here. Add the observations the technician can pick.');
         }
-        const seen = new Set<string>();
-        for (const choice of check.choices) {
-          if (seen.has(choice.id)) report(check.id, 'duplicate_choice', `Two choices share the id “${choice.id}”. Give each choice its own id.`);
-          seen.add(choice.id);
-          follow(check, i, choice.next, `The choice “${choice.label}”`);
+        for (let k = 0; k < choices.length; k++) {
+          // A handful of choices at most (the schema caps them), so a pairwise look is cheapest.
+          for (let earlier = 0; earlier < k; earlier++) {
+            if (choices[earlier].id === choices[k].id) {
+              report(check.id, 'duplicate_choice', `Two choices share the id “${choices[k].id}”. Give each choice its own id.`);
+              break;
+            }
+          }
+          follow(check, i, choices[k].next, choices[k].label);
         }
         break;
       }
       case 'task':
-        follow(check, i, check.next, 'The next step');
+        follow(check, i, check.next, '');
         break;
       case 'finding':
         break;
@@ -104,7 +129,7 @@ export function validateProcedure(document: ProcedureDocument): ValidationProble
       const j = indexById.get(whenExhausted);
       if (!Number.isInteger(maxVisits) || maxVisits < 1) {
         report(check.id, 'bad_retest', `A re-test limit is a whole number of visits, 1 or more; it is ${maxVisits}.`);
-      } else if (j === undefined) {
+      } else if (j === -1) {
         report(check.id, 'bad_retest', `After the last re-test the diagnosis goes to “${whenExhausted}”, which doesn't exist. Point it at an existing check.`);
       } else if (isRetest(checks[j])) {
         report(check.id, 'bad_retest', `After the last re-test the diagnosis must leave the loop: point “when exhausted” at a check that is not itself a re-test check.`);
@@ -115,21 +140,25 @@ export function validateProcedure(document: ProcedureDocument): ValidationProble
   }
 
   const start = indexById.get(document.startCheckId);
-  if (start === undefined) {
+  if (start === -1) {
     report(document.startCheckId, 'missing_start', `The procedure starts at “${document.startCheckId}”, which doesn't exist. Pick the first check.`);
     return problems;
   }
 
   // `possible`: every edge a walk can take (as written, plus the exits of exhausted re-tests) — for reachability
   // and dominance. `settled`: edges once every re-test is exhausted; a cycle there never ends.
-  const possibleFrom = from.slice();
-  const possibleTo = to.slice();
-  const settledTo = to.slice();
-  for (let e = 0; e < from.length; e++) {
+  let redirects = 0;
+  for (let e = 0; e < m; e++) if (exhaustTo[to[e]] !== -1) redirects++;
+  const possibleFrom = new Int32Array(m + redirects);
+  const possibleTo = new Int32Array(m + redirects);
+  possibleFrom.set(from.subarray(0, m));
+  possibleTo.set(to.subarray(0, m));
+  const settledTo = to.slice(0, m);
+  for (let e = 0, extra = m; e < m; e++) {
     const exit = exhaustTo[to[e]];
     if (exit !== -1) {
-      possibleFrom.push(from[e]);
-      possibleTo.push(exit);
+      possibleFrom[extra] = from[e];
+      possibleTo[extra++] = exit;
       settledTo[e] = exit;
     }
   }
@@ -137,21 +166,17 @@ export function validateProcedure(document: ProcedureDocument): ValidationProble
 
   const reached = reachableFrom(possible, start);
   for (let i = 0; i < n; i++) {
-    if (reached[i] === 0 && indexById.get(checks[i].id) === i) {
+    if (reached[i] === 0 && duplicate[i] === 0) {
       report(checks[i].id, 'unreachable', 'No path from the start leads here. Point an outcome at this check or delete it.');
     }
   }
 
-  reportCycles(buildGraph(n, from, settledTo), checks, from, to, exhaustTo, report);
+  reportCycles(buildGraph(n, from.subarray(0, m), settledTo), checks, from.subarray(0, m), to.subarray(0, m), exhaustTo, report);
 
   const dominates = dominanceQuery(immediateDominators(possible, start), start);
-  for (let i = 0; i < n; i++) {
-    const check = checks[i];
-    if (check.kind !== 'measure' || indexById.get(check.id) !== i) continue;
-    const refId = referencedCheckId(check.spec);
-    if (refId === null) continue;
+  for (const { i, check, refId } of referring) {
     const j = indexById.get(refId);
-    if (j === undefined) {
+    if (j === -1) {
       report(check.id, 'bad_reference', `The spec compares with check “${refId}”, which doesn't exist. Pick the check whose reading it compares with.`);
       continue;
     }
@@ -169,81 +194,84 @@ export function validateProcedure(document: ProcedureDocument): ValidationProble
   return problems;
 }
 
+function grow(array: Int32Array): Int32Array {
+  const larger = new Int32Array(array.length * 2);
+  larger.set(array);
+  return larger;
+}
+
 function isRetest(check: Check): boolean {
   return check.kind !== 'finding' && check.retest !== undefined;
 }
 
 type Report = (checkId: string, code: ProblemCode, message: string) => void;
 
-function checkOutcomesComplete(check: MeasureCheck, document: ProcedureDocument, report: Report): void {
-  const missing = requiredVerdicts(check, marginalPolicyOf(check, document)).filter((v) => check.outcomes[v] === undefined);
-  if (missing.length > 0) {
-    const names = missing.map((v) => v.replace('_', ' ')).join(', ');
-    report(check.id, 'missing_outcome', `This check can come out ${names} but has no outcome for ${missing.length === 1 ? 'it' : 'them'}. Say where each leads.`);
+/** `present` has bit v set when the check has an outcome for VERDICTS[v]. */
+function checkOutcomesComplete(check: MeasureCheck, present: number, document: ProcedureDocument, report: Report): void {
+  let missing: string[] | null = null;
+  for (const verdict of requiredVerdicts(check, marginalPolicyOf(check, document))) {
+    if ((present & (1 << VERDICTS.indexOf(verdict))) === 0) (missing ??= []).push(verdict.replace('_', ' '));
+  }
+  if (missing !== null) {
+    report(check.id, 'missing_outcome', `This check can come out ${missing.join(', ')} but has no outcome for ${missing.length === 1 ? 'it' : 'them'}. Say where each leads.`);
   }
 }
 
 function checkSpec(check: MeasureCheck, report: Report): void {
   const info = QUANTITY_INFO[check.quantity];
   const spec = check.spec;
-  const bad = (code: ProblemCode, message: string) => report(check.id, code, message);
-  const show = (v: number) => formatValue(v, check.quantity);
+  const id = check.id;
+  const quantity = check.quantity;
 
   if (check.meterFunction !== undefined && !info.meterFunctions.includes(check.meterFunction)) {
-    bad('unit_mismatch', `The meter is set to ${check.meterFunction.replace('_', ' ')} but the check reads ${info.noun}. Use ${info.meterFunctions.map((f) => f.replace('_', ' ')).join(' or ')}.`);
+    report(id, 'unit_mismatch', `The meter is set to ${check.meterFunction.replace('_', ' ')} but the check reads ${info.noun}. Use ${info.meterFunctions.map((f) => f.replace('_', ' ')).join(' or ')}.`);
   }
   if ('unit' in spec && spec.unit !== undefined && spec.unit !== info.symbol) {
-    bad('unit_mismatch', `The spec is in ${spec.unit} but the check reads ${info.noun} (${info.symbol}). Re-enter the spec in ${info.symbol}.`);
+    report(id, 'unit_mismatch', `The spec is in ${spec.unit} but the check reads ${info.noun} (${info.symbol}). Re-enter the spec in ${info.symbol}.`);
   }
   if ('copperAt20C' in spec && spec.copperAt20C === true && info.dimension !== 'resistance') {
-    bad('unit_mismatch', 'Copper temperature correction only applies to resistance. Untick it for this check.');
+    report(id, 'unit_mismatch', 'Copper temperature correction only applies to resistance. Untick it for this check.');
   }
-  const finite = (...values: number[]) => values.every(Number.isFinite);
-  const unsignedNegative = (v: number) => !info.signed && v < 0;
 
   switch (spec.kind) {
     case 'window':
-      if (!finite(spec.min, spec.max) || !(spec.min < spec.max)) {
-        bad('bad_window', `The window runs from ${show(spec.min)} to ${show(spec.max)}; the minimum must be below the maximum.`);
-      } else if (unsignedNegative(spec.min)) {
-        bad('bad_window', `A ${info.noun} reading can't be negative; start the window at 0 or above.`);
+      if (!(Number.isFinite(spec.min) && Number.isFinite(spec.max)) || !(spec.min < spec.max)) {
+        report(id, 'bad_window', `The window runs from ${formatValue(spec.min, quantity)} to ${formatValue(spec.max, quantity)}; the minimum must be below the maximum.`);
+      } else if (!info.signed && spec.min < 0) {
+        report(id, 'bad_window', `A ${info.noun} reading can't be negative; start the window at 0 or above.`);
       }
       break;
     case 'nominal': {
-      const tolerances = (spec.tolPct === undefined ? 0 : 1) + (spec.tolAbs === undefined ? 0 : 1);
-      const tol = spec.tolPct ?? spec.tolAbs ?? 0;
-      if (!finite(spec.nominal)) bad('bad_window', 'Enter the nominal value as a number.');
-      if (tolerances !== 1) bad('bad_tolerance', 'Give the tolerance either in percent or in units, not both or neither.');
-      else if (!finite(tol) || tol < 0) bad('bad_tolerance', `A tolerance can't be negative; it is ${tol}.`);
+      if (!Number.isFinite(spec.nominal)) report(id, 'bad_window', 'Enter the nominal value as a number.');
+      const problem = toleranceProblem(spec.tolPct, spec.tolAbs);
+      if (problem !== null) report(id, 'bad_tolerance', problem);
       break;
     }
     case 'at_most':
-      if (!finite(spec.max) || (!info.signed && spec.max <= 0)) bad('bad_window', `“At most ${show(spec.max)}” can never be met. Enter a maximum above 0.`);
+      if (!Number.isFinite(spec.max) || (!info.signed && spec.max <= 0)) report(id, 'bad_window', `“At most ${formatValue(spec.max, quantity)}” can never be met. Enter a maximum above 0.`);
       break;
     case 'at_least':
-      if (!finite(spec.min) || unsignedNegative(spec.min)) bad('bad_window', `“At least ${show(spec.min)}” is met by every reading. Enter a minimum of 0 or above.`);
+      if (!Number.isFinite(spec.min) || (!info.signed && spec.min < 0)) report(id, 'bad_window', `“At least ${formatValue(spec.min, quantity)}” is met by every reading. Enter a minimum of 0 or above.`);
       break;
     case 'expect_open':
-      if (!info.opensOnOverRange) bad('unit_mismatch', `An open circuit is read on a resistance or diode check, not ${info.noun}.`);
-      if (spec.openAbove !== undefined && !(finite(spec.openAbove) && spec.openAbove > 0)) bad('bad_spec', 'The value treated as open must be above 0.');
+      if (!info.opensOnOverRange) report(id, 'unit_mismatch', `An open circuit is read on a resistance or diode check, not ${info.noun}.`);
+      if (spec.openAbove !== undefined && !(Number.isFinite(spec.openAbove) && spec.openAbove > 0)) report(id, 'bad_spec', 'The value treated as open must be above 0.');
       break;
     case 'expect_continuity':
-      if (info.dimension !== 'resistance') bad('unit_mismatch', `Continuity is read on a resistance or continuity check, not ${info.noun}.`);
-      if (!(finite(spec.max) && spec.max > 0)) bad('bad_window', 'The continuity threshold must be above 0 Ω.');
+      if (info.dimension !== 'resistance') report(id, 'unit_mismatch', `Continuity is read on a resistance or continuity check, not ${info.noun}.`);
+      if (!(Number.isFinite(spec.max) && spec.max > 0)) report(id, 'bad_window', 'The continuity threshold must be above 0 Ω.');
       break;
     case 'ratio':
-      if (!info.opensOnOverRange) bad('unit_mismatch', `A both-ways ratio is read on a diode or resistance check, not ${info.noun}.`);
-      if (!(finite(spec.minRatio) && spec.minRatio > 1)) bad('bad_spec', `The reverse/forward ratio must be more than 1; it is ${spec.minRatio}.`);
+      if (!info.opensOnOverRange) report(id, 'unit_mismatch', `A both-ways ratio is read on a diode or resistance check, not ${info.noun}.`);
+      if (!(Number.isFinite(spec.minRatio) && spec.minRatio > 1)) report(id, 'bad_spec', `The reverse/forward ratio must be more than 1; it is ${spec.minRatio}.`);
       break;
     case 'agree_with': {
-      const tolerances = (spec.tolPct === undefined ? 0 : 1) + (spec.tolAbs === undefined ? 0 : 1);
-      const tol = spec.tolPct ?? spec.tolAbs ?? 0;
-      if (tolerances !== 1) bad('bad_tolerance', 'Say how close the readings must agree: a tolerance in percent or in units, not both or neither.');
-      else if (!finite(tol) || tol < 0) bad('bad_tolerance', `A tolerance can't be negative; it is ${tol}.`);
+      const problem = toleranceProblem(spec.tolPct, spec.tolAbs);
+      if (problem !== null) report(id, 'bad_tolerance', problem);
       if (spec.wire !== undefined) {
-        if (info.dimension !== 'resistance') bad('unit_mismatch', 'Wire resistance only adds to a resistance reading. Remove the wire from this spec.');
-        if (!isValidGauge(spec.wire.gauge)) bad('bad_spec', `Wire size ${spec.wire.gauge.size} ${spec.wire.gauge.system === 'awg' ? 'AWG' : 'mm²'} doesn't exist. Enter the size from the wiring diagram.`);
-        if (!(finite(spec.wire.lengthM) && spec.wire.lengthM > 0)) bad('bad_spec', 'Enter the wire length in metres, above 0.');
+        if (info.dimension !== 'resistance') report(id, 'unit_mismatch', 'Wire resistance only adds to a resistance reading. Remove the wire from this spec.');
+        if (!isValidGauge(spec.wire.gauge)) report(id, 'bad_spec', `Wire size ${spec.wire.gauge.size} ${spec.wire.gauge.system === 'awg' ? 'AWG' : 'mm²'} doesn't exist. Enter the size from the wiring diagram.`);
+        if (!(Number.isFinite(spec.wire.lengthM) && spec.wire.lengthM > 0)) report(id, 'bad_spec', 'Enter the wire length in metres, above 0.');
       }
       break;
     }
@@ -253,11 +281,18 @@ function checkSpec(check: MeasureCheck, report: Report): void {
 
   if (check.range !== undefined) {
     const highest = highestLimit(spec);
-    if (!(check.range > 0)) bad('bad_spec', 'The meter range must be above 0.');
+    if (!(check.range > 0)) report(id, 'bad_spec', 'The meter range must be above 0.');
     else if (highest !== null && highest > check.range) {
-      bad('range_too_small', `The ${show(check.range)} range can't show ${show(highest)}. Pick a higher range or autorange.`);
+      report(id, 'range_too_small', `The ${formatValue(check.range, quantity)} range can't show ${formatValue(highest, quantity)}. Pick a higher range or autorange.`);
     }
   }
+}
+
+/** Exactly one tolerance, finite and not negative. */
+function toleranceProblem(tolPct: number | undefined, tolAbs: number | undefined): string | null {
+  if ((tolPct === undefined) === (tolAbs === undefined)) return 'Give the tolerance either in percent or in units, not both or neither.';
+  const tol = tolPct ?? tolAbs ?? 0;
+  return Number.isFinite(tol) && tol >= 0 ? null : `A tolerance must be 0 or more; it is ${tol}.`;
 }
 
 /** The largest value a reading must be shown at to be judged; above the range the meter shows OL. */
@@ -280,30 +315,41 @@ function highestLimit(spec: Spec): number | null {
  * Loops that survive once every re-test is used up never end. `from`/`to` are the edges as written: an edge
  * into a re-test check whose exit lies in the same loop means the exit leads straight back in.
  */
-function reportCycles(settled: Graph, checks: Check[], from: number[], to: number[], exhaustTo: Int32Array, report: Report): void {
+function reportCycles(settled: Graph, checks: Check[], from: Int32Array, to: Int32Array, exhaustTo: Int32Array, report: Report): void {
+  const n = settled.nodeCount;
   const { component, count } = stronglyConnectedComponents(settled);
-  const members: number[][] = Array.from({ length: count }, () => []);
-  for (let v = 0; v < settled.nodeCount; v++) members[component[v]].push(v);
+  const size = new Int32Array(count);
+  const selfLoop = new Uint8Array(count);
+  for (let v = 0; v < n; v++) {
+    size[component[v]]++;
+    for (let e = settled.offsets[v]; e < settled.offsets[v + 1]; e++) if (settled.targets[e] === v) selfLoop[component[v]] = 1;
+  }
   const reentered = new Uint8Array(count);
   for (let e = 0; e < from.length; e++) {
     const exit = exhaustTo[to[e]];
     if (exit !== -1 && component[exit] === component[from[e]]) reentered[component[exit]] = 1;
   }
-  for (const group of members) {
-    const v = group[0]; // members are in document order
-    let selfLoop = false;
-    for (let e = settled.offsets[v]; e < settled.offsets[v + 1]; e++) if (settled.targets[e] === v) selfLoop = true;
-    if (group.length < 2 && !selfLoop) continue;
-    const names = group.slice(0, CYCLE_NAMES_SHOWN).map((i) => `“${checks[i].id}”`).join(', ');
-    const more = group.length > CYCLE_NAMES_SHOWN ? ` and ${group.length - CYCLE_NAMES_SHOWN} more` : '';
-    if (selfLoop && group.length === 1 && reentered[component[v]] === 0) {
-      report(checks[v].id, 'cycle', `“${checks[v].id}” leads back to itself. Point the outcome at the next check, or add a re-test check in between.`);
+  // Members of each looping component, in document order; well-formed documents have none.
+  const loops = new Map<number, number[]>();
+  for (let v = 0; v < n; v++) {
+    const c = component[v];
+    if (size[c] < 2 && selfLoop[c] === 0) continue;
+    const members = loops.get(c);
+    if (members === undefined) loops.set(c, [v]);
+    else members.push(v);
+  }
+  for (const [c, group] of loops) {
+    const first = checks[group[0]].id;
+    if (group.length === 1 && reentered[c] === 0) {
+      report(first, 'cycle', `“${first}” leads back to itself. Point the outcome at the next check, or add a re-test check in between.`);
       continue;
     }
+    const names = group.slice(0, CYCLE_NAMES_SHOWN).map((i) => `“${checks[i].id}”`).join(', ');
+    const more = group.length > CYCLE_NAMES_SHOWN ? ` and ${group.length - CYCLE_NAMES_SHOWN} more` : '';
     report(
-      checks[group[0]].id,
+      first,
       'cycle',
-      reentered[component[v]] === 1
+      reentered[c] === 1
         ? `The loop through ${names}${more} never ends: after the last re-test the diagnosis comes back into it. Point “when exhausted” at a check outside the loop.`
         : `Checks ${names}${more} form a loop with no limit. Mark the check the loop returns to as a re-test with a visit limit, or point an outcome forward.`,
     );

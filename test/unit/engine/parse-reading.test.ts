@@ -304,6 +304,22 @@ describe('parseReading: properties', () => {
     );
   });
 
+  it('gives the same answer for a text and its NFKC form (the skip of normalisation for common symbols is safe)', () => {
+    const symbols = fc.string({ unit: fc.constantFrom(...'0123456789., kmMµμuΩΩωVA°C−∞⎓\u0301\u00a0'.split('')), maxLength: 12 });
+    fc.assert(
+      fc.property(fc.oneof(symbols, fc.string({ unit: 'grapheme', maxLength: 12 })), fc.constantFrom(...QUANTITIES), (text, q) => {
+        expect(parseReading(text, q)).toEqual(parseReading(text.normalize('NFKC'), q));
+      }),
+      { numRuns: 3000 },
+    );
+  });
+
+  it('remembers unit parses without mixing up quantities', () => {
+    expect(parseReading('12 V', 'voltage_dc').ok).toBe(true);
+    expect(parseReading('12 V', 'resistance').ok).toBe(false);
+    expect(parseReading('12 V', 'voltage_dc').ok).toBe(true);
+  });
+
   it('reads any plain decimal number typed with a point or a comma the same as Number()', () => {
     fc.assert(
       fc.property(fc.integer({ min: 0, max: 999_999 }), fc.integer({ min: 0, max: 6 }), (digits, decimals) => {
