@@ -20,7 +20,7 @@ export function buildGraph(nodeCount: number, from: ArrayLike<number>, to: Array
   return { nodeCount, offsets, targets };
 }
 
-export function reverseGraph(g: Graph): Graph {
+function reverseGraph(g: Graph): Graph {
   const from = new Int32Array(g.targets.length);
   for (let v = 0; v < g.nodeCount; v++) for (let e = g.offsets[v]; e < g.offsets[v + 1]; e++) from[e] = v;
   return buildGraph(g.nodeCount, g.targets, from);

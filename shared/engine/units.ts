@@ -18,7 +18,7 @@ export function prefixSymbol(exponent: number): string {
 }
 
 /** Exact powers of ten: 10^0 … 10^22 are all representable, so scaling by them rounds once. */
-export const POW10: readonly number[] = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
+const POW10: readonly number[] = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
 
 /** Multiply by 10^exponent with a single rounding whenever the power is exactly representable. */
 export function scaleByPowerOfTen(value: number, exponent: number): number {

@@ -70,23 +70,24 @@ export function nextCheckId(
     }
     case 'measure': {
       if (!('verdict' in step)) return { ok: false, message: `“${check.title}” needs a reading.` };
-      via = step.verdict;
-      if (step.verdict === 'marginal') {
+      let outcome: Verdict = step.verdict;
+      if (outcome === 'marginal') {
         const policy = marginalPolicyOf(check, document);
-        if (policy === 'pass') via = 'in_spec';
+        if (policy === 'pass') outcome = 'in_spec';
         else if (policy === 'fail') {
           if (step.leans == null) return { ok: false, message: 'A marginal verdict needs the side it leans to.' };
-          via = step.leans;
+          outcome = step.leans;
         }
       }
-      target = check.outcomes[via as Verdict];
+      target = check.outcomes[outcome];
+      via = outcome;
       if (target === undefined) {
         return {
           ok: false,
           message:
-            via === 'no_reading'
+            outcome === 'no_reading'
               ? `“${check.title}” needs a reading; this procedure has no way on without one.`
-              : `“${check.title}” has no outcome for ${via.replace('_', ' ')}. Ask a lead to fix the procedure.`,
+              : `“${check.title}” has no outcome for ${outcome.replace('_', ' ')}. Ask a lead to fix the procedure.`,
         };
       }
       break;
