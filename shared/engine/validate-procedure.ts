@@ -1,7 +1,7 @@
 import { buildGraph, dominanceQuery, type Graph, immediateDominators, reachableFrom, stronglyConnectedComponents } from './graph';
 import { marginalPolicyOf, requiredVerdicts } from './outcomes';
 import type { Check, MeasureCheck, ProcedureDocument } from './procedure';
-import { QUANTITY_INFO } from './quantity';
+import { QUANTITIES, QUANTITY_INFO } from './quantity';
 import { referencedCheckId, type Spec } from './spec';
 import { IdIndex } from './id-index';
 import { formatValue } from './units';
@@ -49,10 +49,10 @@ export function validateProcedure(document: ProcedureDocument): ValidationProble
   const checks = document.checks;
   const n = checks.length;
 
-  const indexById = new IdIndex(n, (i) => checks[i].id);
+  const indexById = new IdIndex(n);
   const duplicate = new Uint8Array(n);
   for (let i = 0; i < n; i++) {
-    if (indexById.add(i) !== -1) {
+    if (indexById.add(checks[i].id, i) !== -1) {
       duplicate[i] = 1;
       report(checks[i].id, 'duplicate_id', `Two checks share the id “${checks[i].id}”. Give each check its own id.`);
     }
@@ -66,6 +66,8 @@ export function validateProcedure(document: ProcedureDocument): ValidationProble
   const exhaustTo = new Int32Array(n).fill(-1);
   /** Measure checks whose spec compares with an earlier reading, checked once dominators are known. */
   const referring: { i: number; check: MeasureCheck; refId: string }[] = [];
+  /** Index into QUANTITIES of each measure check's quantity, -1 for other kinds: references are checked from here, not by revisiting the document. */
+  const measured = new Int8Array(n).fill(-1);
   // `label` names the edge in a message: a verdict, a choice label, or '' for a task's next step.
   const follow = (check: Check, i: number, target: string, label: string) => {
     const j = indexById.get(target);
@@ -97,6 +99,7 @@ export function validateProcedure(document: ProcedureDocument): ValidationProble
         }
         checkOutcomesComplete(check, present, document, report);
         checkSpec(check, report);
+        measured[i] = QUANTITIES.indexOf(check.quantity);
         const refId = referencedCheckId(check.spec);
         if (refId !== null) referring.push({ i, check, refId });
         break;
@@ -180,13 +183,13 @@ export function validateProcedure(document: ProcedureDocument): ValidationProble
       report(check.id, 'bad_reference', `The spec compares with check “${refId}”, which doesn't exist. Pick the check whose reading it compares with.`);
       continue;
     }
-    const ref = checks[j];
+    const refQuantity = measured[j] === -1 ? null : QUANTITIES[measured[j]];
     if (j === i) {
       report(check.id, 'bad_reference', 'The spec compares this check with itself. Pick the earlier check whose reading it compares with.');
-    } else if (ref.kind !== 'measure') {
+    } else if (refQuantity === null) {
       report(check.id, 'bad_reference', `The spec compares with “${refId}”, which takes no reading. Pick a measure check.`);
-    } else if (QUANTITY_INFO[ref.quantity].dimension !== QUANTITY_INFO[check.quantity].dimension || (check.spec.kind === 'ratio' && ref.quantity !== check.quantity)) {
-      report(check.id, 'bad_reference', `The spec compares this ${QUANTITY_INFO[check.quantity].noun} reading with “${refId}”, which reads ${QUANTITY_INFO[ref.quantity].noun}. Compare like with like.`);
+    } else if (QUANTITY_INFO[refQuantity].dimension !== QUANTITY_INFO[check.quantity].dimension || (check.spec.kind === 'ratio' && refQuantity !== check.quantity)) {
+      report(check.id, 'bad_reference', `The spec compares this ${QUANTITY_INFO[check.quantity].noun} reading with “${refId}”, which reads ${QUANTITY_INFO[refQuantity].noun}. Compare like with like.`);
     } else if (reached[i] === 1 && !dominates(j, i)) {
       report(check.id, 'reference_not_dominating', `Some paths reach this check without passing “${refId}”, so its reading may be missing. Compare with a check every path passes first, or move this check after it.`);
     }
