@@ -13,7 +13,7 @@ const CONNECTIONS = 16;
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
 
 function startServer(mode: 'bare' | 'app'): Promise<{ child: ChildProcess; info: { port: number; token?: string; idFile?: string } }> {
-  const child = spawn(path.join(ROOT, 'node_modules/.bin/tsx'), ['bench/bench-server.ts', mode], { cwd: ROOT, stdio: ['ignore', 'pipe', 'inherit'] });
+  const child = spawn(process.execPath, ['--import', 'tsx', 'bench/bench-server.ts', mode], { cwd: ROOT, stdio: ['ignore', 'pipe', 'inherit'] });
   return new Promise((resolve, reject) => {
     let out = '';
     child.stdout!.on('data', (c: Buffer) => {

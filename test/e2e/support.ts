@@ -1,10 +1,10 @@
-import { type ChildProcess, spawn } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { type Browser, type BrowserContext, chromium, type Locator, type Page } from 'playwright-core';
 import type { Role } from '@shared/auth/roles';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '@server/seed/demo-accounts';
+import { spawnServer } from '../support/server-process';
 
 const ROOT = path.resolve(__dirname, '../..');
 const SHOTS = path.join(ROOT, 'screenshots');
@@ -24,48 +24,16 @@ export interface RunningServer {
 }
 
 /** The real server on a free port with a fresh data folder; resolves once it says it is ready. */
-export function startServer(): Promise<RunningServer> {
+export async function startServer(): Promise<RunningServer> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'probepath-e2e-'));
-  const child: ChildProcess = spawn(path.join(ROOT, 'node_modules/.bin/tsx'), ['server/index.ts'], {
-    cwd: ROOT,
-    env: {
-      ...process.env,
-      PORT: '0',
-      DATA_DIR: dataDir,
-      JWT_SECRET: 'e2e-secret-'.padEnd(48, 'x'),
-      BUILD_WEB: '0',
-      LOG_LEVEL: 'warn',
+  const server = await spawnServer(dataDir, { JWT_SECRET: 'e2e-secret-'.padEnd(48, 'x') });
+  return {
+    url: server.url,
+    stop: async () => {
+      await server.kill('SIGTERM');
+      fs.rmSync(dataDir, { recursive: true, force: true });
     },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  let output = '';
-  const stop = () =>
-    new Promise<void>((resolve) => {
-      child.once('exit', () => resolve());
-      if (child.exitCode !== null) resolve();
-      else child.kill('SIGTERM');
-    }).then(() => fs.rmSync(dataDir, { recursive: true, force: true }));
-
-  return new Promise((resolve, reject) => {
-    const timer = setTimeout(() => {
-      void stop();
-      reject(new Error(`The server did not say it was ready within 60 s:\n${output}`));
-    }, 60_000);
-    const read = (chunk: Buffer) => {
-      output += chunk.toString();
-      const ready = /Probepath is ready at (http:\/\/localhost:\d+)/.exec(output);
-      if (ready) {
-        clearTimeout(timer);
-        resolve({ url: ready[1], stop });
-      }
-    };
-    child.stdout!.on('data', read);
-    child.stderr!.on('data', read);
-    child.once('exit', (code) => {
-      clearTimeout(timer);
-      reject(new Error(`The server exited with ${code} before it was ready:\n${output}`));
-    });
-  });
+  };
 }
 
 export function launchBrowser(): Promise<Browser> {

@@ -12,7 +12,8 @@ export interface ServerProcess {
 
 /** Runs the real server (`tsx server/index.ts`) on a free port over `dataDir`; resolves once it is ready. */
 export function spawnServer(dataDir: string, env: Record<string, string> = {}): Promise<ServerProcess> {
-  const child = spawn(path.join(ROOT, 'node_modules/.bin/tsx'), ['server/index.ts'], {
+  // Node itself with tsx as a loader, not the tsx wrapper: a signal must reach the server, not a parent that orphans it.
+  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     cwd: ROOT,
     env: { ...process.env, PORT: '0', DATA_DIR: dataDir, JWT_SECRET: 'process-test-secret-'.padEnd(48, 'x'), BUILD_WEB: '0', LOG_LEVEL: 'warn', ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
