@@ -1,6 +1,6 @@
-import fs from 'node:fs';
 import path from 'node:path';
 import express from 'express';
+import { prepareIndexHtml } from './index-html';
 
 /**
  * Serves the web export: hashed bundles and assets are cached for a year,
@@ -8,7 +8,7 @@ import express from 'express';
  * links survive a reload.
  */
 export function serveWeb(app: express.Express, webDir: string) {
-  const index = path.join(webDir, 'index.html');
+  const index = prepareIndexHtml(webDir);
   app.use(
     express.static(webDir, {
       index: false,
@@ -23,8 +23,8 @@ export function serveWeb(app: express.Express, webDir: string) {
     }),
   );
   app.get('/{*splat}', (_req, res, next) => {
-    if (!fs.existsSync(index)) return next();
+    if (index === null) return next();
     res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(index);
+    res.type('html').send(index);
   });
 }
