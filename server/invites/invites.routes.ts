@@ -1,5 +1,5 @@
 import { IsNull, MoreThan } from 'typeorm';
-import type { Invite as InviteView, InvitePreview } from '@shared/api/types';
+import type { CreateInviteResponse, Invite as InviteView, InvitePreview } from '@shared/api/types';
 import { acceptInviteSchema, createInviteSchema } from '@shared/auth/schemas';
 import type { AcceptInviteInput, CreateInviteInput } from '@shared/auth/schemas';
 import type { Role } from '@shared/auth/roles';
@@ -81,7 +81,8 @@ export const inviteRoutes: RouteDef[] = [
         mailSent = false;
         req.log.error({ err }, 'invite mail not sent');
       }
-      res.status(201).json({ invite: toView({ ...invite, invitedBy: req.member }), mailSent });
+      const body: CreateInviteResponse = { invite: toView({ ...invite, invitedBy: req.member }), mailSent };
+      res.status(201).json(body);
     },
   },
   {

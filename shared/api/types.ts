@@ -39,6 +39,12 @@ export interface Invite {
   createdAt: string;
 }
 
+export interface CreateInviteResponse {
+  invite: Invite;
+  /** False when the invite was saved but its e-mail could not be sent. */
+  mailSent: boolean;
+}
+
 export interface InvitePreview {
   email: string;
   role: Role;

@@ -1,6 +1,6 @@
 import useSWR from 'swr';
 import useSWRMutation from 'swr/mutation';
-import type { Invite, InvitePreview, SignInResponse } from '@shared/api/types';
+import type { CreateInviteResponse, Invite, InvitePreview, SignInResponse } from '@shared/api/types';
 import type { AcceptInviteInput, CreateInviteInput } from '@shared/auth/schemas';
 import { api, type ApiError } from '@/lib/api';
 
@@ -12,7 +12,7 @@ export function useInvites() {
 }
 
 export function useCreateInvite() {
-  return useSWRMutation<{ invite: Invite }, ApiError, string, CreateInviteInput>(KEY, (path, { arg }) =>
+  return useSWRMutation<CreateInviteResponse, ApiError, string, CreateInviteInput>(KEY, (path, { arg }) =>
     api(path, 'POST', arg),
   );
 }

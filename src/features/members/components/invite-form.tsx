@@ -15,19 +15,19 @@ import { space } from '@/lib/theme';
 /** Invite a new member by e-mail with the role they will have. */
 export function InviteForm() {
   const create = useCreateInvite();
-  const [sentTo, setSentTo] = useState<string | null>(null);
+  const [sent, setSent] = useState<{ to: string; mailed: boolean } | null>(null);
   return (
     <Formik
       initialValues={{ email: '', role: 'tech' as Role }}
       validationSchema={createInviteSchema}
       onSubmit={async (values, helpers) => {
         helpers.setStatus(undefined);
-        setSentTo(null);
+        setSent(null);
         const input = createInviteSchema.cast(values);
         try {
-          await create.trigger(input);
+          const { mailSent } = await create.trigger(input);
           helpers.resetForm({ values: { email: '', role: values.role } });
-          setSentTo(input.email);
+          setSent({ to: input.email, mailed: mailSent });
         } catch (error) {
           showServerError(error, helpers);
         }
@@ -38,10 +38,13 @@ export function InviteForm() {
           <Heading level={2}>Invite someone</Heading>
           <Text tone="textMuted">They get an e-mail with a link to choose their name and password.</Text>
           <FormError message={status} />
-          {sentTo ? (
+          {sent?.mailed ? (
             <Text role="status" tone="success" testID="invite-sent">
-              Invite sent to {sentTo}. It waits under Pending invites until they accept.
+              Invite sent to {sent.to}. It waits under Pending invites until they accept.
             </Text>
+          ) : null}
+          {sent && !sent.mailed ? (
+            <FormError message={`The invite for ${sent.to} is saved, but its e-mail could not be sent. Check the mail settings, then revoke it and invite again.`} />
           ) : null}
           <TextField name="email" label="E-mail" testID="invite-email" keyboardType="email-address" inputMode="email" />
           <RoleField />
