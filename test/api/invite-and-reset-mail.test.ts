@@ -93,3 +93,14 @@ describe('password reset through the mail fake', () => {
     expect(await h.mailTo('ghost@harrowlane.example')).toHaveLength(0);
   });
 });
+
+describe('when mail cannot be sent', () => {
+  it('keeps the invite and says the e-mail did not go', async () => {
+    await h.runtime.fakeSmtp!.close();
+    const res = await request(h.app).post('/api/invites').set('authorization', `Bearer ${owner}`).send({ email: 'offline@harrowlane.example', role: 'tech' });
+    expect(res.status).toBe(201);
+    expect(res.body.mailSent).toBe(false);
+    const listed = await request(h.app).get('/api/invites').set('authorization', `Bearer ${owner}`);
+    expect(listed.body.invites.map((i: { email: string }) => i.email)).toContain('offline@harrowlane.example');
+  });
+});
