@@ -10,6 +10,8 @@ const escape = (p) => p.replace(/[/\\^$*+?.()|[\]{}]/g, '\\$&');
 const blocked = ['server', 'test', 'data', 'dist', '.test-data', 'scripts', 'bench'].map(
   (dir) => new RegExp('^' + escape(path.join(__dirname, dir)) + '(/.*)?$'),
 );
+// Side folders of an export in progress (server/web/build-web.ts).
+blocked.push(new RegExp('^' + escape(path.join(__dirname, '.web-build-')) + '.*$'));
 const existing = config.resolver.blockList;
 config.resolver.blockList = [
   ...(Array.isArray(existing) ? existing : existing ? [existing] : []),

@@ -3,6 +3,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 
 const SOURCES = ['app', 'src', 'shared', 'fonts', 'app.json', 'package.json', 'metro.config.js'];
+const LOCK_STALE_MS = 10 * 60 * 1000;
 
 function newestMtime(p: string): number {
   if (!fs.existsSync(p)) return 0;
@@ -21,15 +22,51 @@ export function webBuildIsStale(root: string): boolean {
   return SOURCES.some((s) => newestMtime(path.join(root, s)) > built);
 }
 
-/** Runs `expo export --platform web` into dist/ when the build is missing or stale. */
+/** One build at a time across processes (a start and a test run may both want one). */
+function withBuildLock(root: string, work: () => void) {
+  const lock = path.join(root, '.web-build.lock');
+  for (;;) {
+    try {
+      fs.mkdirSync(lock);
+      break;
+    } catch {
+      const age = Date.now() - (fs.statSync(lock, { throwIfNoEntry: false })?.mtimeMs ?? Date.now());
+      if (age > LOCK_STALE_MS) fs.rmSync(lock, { recursive: true, force: true });
+      else Atomics.wait(new Int32Array(new SharedArrayBuffer(4)), 0, 0, 500);
+    }
+  }
+  try {
+    work();
+  } finally {
+    fs.rmSync(lock, { recursive: true, force: true });
+  }
+}
+
+/**
+ * Runs `expo export --platform web` when dist/ is missing or stale. It exports
+ * to a side folder and then copies bundles and assets before index.html, never
+ * deleting the old hashed files, so a server already serving dist/ keeps working.
+ */
 export function ensureWebBuild(root: string, log: (msg: string) => void): void {
   if (!webBuildIsStale(root)) return;
-  log('Building the web app (expo export, about half a minute)…');
-  const expo = path.join(root, 'node_modules', '.bin', 'expo');
-  const result = spawnSync(expo, ['export', '--platform', 'web', '--output-dir', 'dist'], {
-    cwd: root,
-    stdio: 'inherit',
-    env: { ...process.env, EXPO_OFFLINE: '1', CI: '1', EXPO_NO_TELEMETRY: '1' },
+  withBuildLock(root, () => {
+    if (!webBuildIsStale(root)) return;
+    log('Building the web app (expo export, about half a minute)…');
+    const out = path.join(root, `.web-build-${process.pid}`);
+    const expo = path.join(root, 'node_modules', '.bin', 'expo');
+    const result = spawnSync(expo, ['export', '--platform', 'web', '--output-dir', path.basename(out)], {
+      cwd: root,
+      stdio: 'inherit',
+      env: { ...process.env, EXPO_OFFLINE: '1', CI: '1', EXPO_NO_TELEMETRY: '1' },
+    });
+    if (result.status !== 0) {
+      fs.rmSync(out, { recursive: true, force: true });
+      throw new Error('The web build failed; see the output above.');
+    }
+    const dist = path.join(root, 'dist');
+    fs.mkdirSync(dist, { recursive: true });
+    const entries = fs.readdirSync(out).sort((a, b) => Number(a === 'index.html') - Number(b === 'index.html'));
+    for (const entry of entries) fs.cpSync(path.join(out, entry), path.join(dist, entry), { recursive: true, force: true });
+    fs.rmSync(out, { recursive: true, force: true });
   });
-  if (result.status !== 0) throw new Error('The web build failed; see the output above.');
 }
