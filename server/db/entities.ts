@@ -7,9 +7,10 @@ import { Job } from '../jobs/job.entity';
 import { Machine } from '../machines/machine.entity';
 import { MailMessage } from '../mail/mail-message.entity';
 import { Meter } from '../meters/meter.entity';
+import { DiagnosisPhoto } from '../photos/photo.entity';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
 import { Procedure } from '../procedures/procedure.entity';
 import { Shop } from '../shops/shop.entity';
 import { User } from '../users/user.entity';
 
-export const entities = [Shop, User, Invite, PasswordReset, MailMessage, Machine, Job, Meter, Procedure, ProcedureVersion, Diagnosis, DiagnosisStep, IdempotencyRecord];
+export const entities = [Shop, User, Invite, PasswordReset, MailMessage, Machine, Job, Meter, Procedure, ProcedureVersion, Diagnosis, DiagnosisStep, IdempotencyRecord, DiagnosisPhoto];
