@@ -48,6 +48,10 @@ export class ProcedureVersion {
   @Column('text', { nullable: true })
   publishedById: string | null;
 
+  /** What changed, written by the lead who published the version. */
+  @Column('text', { nullable: true })
+  note: string | null;
+
   @Column('datetime', { nullable: true })
   retiredAt: Date | null;
 
