@@ -27,10 +27,16 @@ export function setUnauthorizedHandler(handler: (() => void) | null) {
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'DELETE';
 
-export async function api<T>(path: string, method: Method = 'GET', body?: unknown): Promise<T> {
+export interface RequestOptions {
+  /** Sent as Idempotency-Key: a retry with the same key and body is answered once, never recorded twice. */
+  idempotencyKey?: string;
+}
+
+export async function api<T>(path: string, method: Method = 'GET', body?: unknown, options: RequestOptions = {}): Promise<T> {
   const headers: Record<string, string> = { Accept: 'application/json' };
   if (body !== undefined) headers['Content-Type'] = 'application/json';
   if (authToken) headers.Authorization = `Bearer ${authToken}`;
+  if (options.idempotencyKey) headers['Idempotency-Key'] = options.idempotencyKey;
 
   let response: Response;
   try {
