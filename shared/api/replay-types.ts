@@ -1,0 +1,37 @@
+import type { PracticeAsk } from '../practice/schemas';
+
+/** JSON shapes of step comments and practice attempts. */
+
+export interface StepCommentView {
+  id: string;
+  diagnosisId: string;
+  stepSeq: number;
+  body: string;
+  author: string;
+  createdAt: string;
+}
+
+export interface PracticeAttemptView {
+  id: string;
+  runId: string;
+  diagnosisId: string;
+  stepSeq: number;
+  checkId: string;
+  asked: PracticeAsk;
+  answer: string;
+  /** Scored by the server from the recorded step. */
+  correct: boolean;
+  expected: string;
+  userId: string;
+  userName: string;
+  procedureTitle: string;
+  machine: string;
+  createdAt: string;
+}
+
+/** The server's answer to a practice attempt: the score and why. */
+export interface PracticeResult {
+  attempt: PracticeAttemptView;
+  expectedLabel: string;
+  explanation: string;
+}
