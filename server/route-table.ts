@@ -9,6 +9,8 @@ import { mailRoutes } from './mail/mail.routes';
 import { memberRoutes } from './members/members.routes';
 import { meterRoutes } from './meters/meters.routes';
 import { procedureRoutes } from './procedures/procedures.routes';
+import { commentRoutes } from './replays/comments.routes';
+import { practiceRoutes } from './replays/practice.routes';
 
 /**
  * Every API route with the roles allowed to use it, in one place: app.ts mounts
@@ -26,4 +28,6 @@ export const routeTable: readonly RouteDef[] = [
   ...meterRoutes,
   ...procedureRoutes,
   ...diagnosisRoutes,
+  ...commentRoutes,
+  ...practiceRoutes,
 ];

@@ -10,7 +10,9 @@ import { Meter } from '../meters/meter.entity';
 import { DiagnosisPhoto } from '../photos/photo.entity';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
 import { Procedure } from '../procedures/procedure.entity';
+import { PracticeAttempt } from '../replays/practice-attempt.entity';
+import { StepComment } from '../replays/step-comment.entity';
 import { Shop } from '../shops/shop.entity';
 import { User } from '../users/user.entity';
 
-export const entities = [Shop, User, Invite, PasswordReset, MailMessage, Machine, Job, Meter, Procedure, ProcedureVersion, Diagnosis, DiagnosisStep, IdempotencyRecord, DiagnosisPhoto];
+export const entities = [Shop, User, Invite, PasswordReset, MailMessage, Machine, Job, Meter, Procedure, ProcedureVersion, Diagnosis, DiagnosisStep, IdempotencyRecord, DiagnosisPhoto, StepComment, PracticeAttempt];
