@@ -148,23 +148,24 @@ export function validateProcedure(document: ProcedureDocument): ValidationProble
     return problems;
   }
 
-  // `possible`: every edge a walk can take (as written, plus the exits of exhausted re-tests) — for reachability
-  // and dominance. `settled`: edges once every re-test is exhausted; a cycle there never ends.
-  let redirects = 0;
-  for (let e = 0; e < m; e++) if (exhaustTo[to[e]] !== -1) redirects++;
-  const possibleFrom = new Int32Array(m + redirects);
-  const possibleTo = new Int32Array(m + redirects);
+  // `possible`: every edge a walk can take — for reachability and dominance. An exhausted re-test check is
+  // skipped only after it has run maxVisits (≥ 1) times, so its exit is drawn from the re-test check itself:
+  // its reading exists on every path through the exit. `settled`: edges once every re-test is exhausted; a
+  // cycle there never ends.
+  let exits = 0;
+  for (let i = 0; i < n; i++) if (exhaustTo[i] !== -1) exits++;
+  const possibleFrom = new Int32Array(m + exits);
+  const possibleTo = new Int32Array(m + exits);
   possibleFrom.set(from.subarray(0, m));
   possibleTo.set(to.subarray(0, m));
-  const settledTo = to.slice(0, m);
-  for (let e = 0, extra = m; e < m; e++) {
-    const exit = exhaustTo[to[e]];
-    if (exit !== -1) {
-      possibleFrom[extra] = from[e];
-      possibleTo[extra++] = exit;
-      settledTo[e] = exit;
+  for (let i = 0, extra = m; i < n; i++) {
+    if (exhaustTo[i] !== -1) {
+      possibleFrom[extra] = i;
+      possibleTo[extra++] = exhaustTo[i];
     }
   }
+  const settledTo = to.slice(0, m);
+  for (let e = 0; e < m; e++) if (exhaustTo[to[e]] !== -1) settledTo[e] = exhaustTo[to[e]];
   const possible = buildGraph(n, possibleFrom, possibleTo);
 
   const reached = reachableFrom(possible, start);

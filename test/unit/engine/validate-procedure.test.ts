@@ -226,6 +226,40 @@ describe('validateProcedure: earlier-reading references', () => {
     expect(found[0].message).toMatch(/without passing “ckp-ohms”/);
   });
 
+  it('accepts a reference to a re-measured check past the exit of its loop: the exit is only taken after a visit', () => {
+    const doc: ProcedureDocument = {
+      startCheckId: 'unplug',
+      cautions: [],
+      checks: [
+        { id: 'unplug', kind: 'task', title: 'Unplug the sensor', instruction: 'Ignition off, then unplug.', next: 'coil' },
+        {
+          id: 'coil',
+          kind: 'measure',
+          title: 'Coil at the sensor',
+          instruction: 'Measure across the sensor pins.',
+          quantity: 'resistance',
+          spec: { kind: 'window', min: 400, max: 500 },
+          outcomes: { in_spec: 'at-unit', low: 'f-coil', high: 'f-coil', open: 'f-coil', marginal: 'coil' },
+          marginalPolicy: 'branch',
+          retest: { maxVisits: 2, whenExhausted: 'at-unit' },
+        },
+        {
+          id: 'at-unit',
+          kind: 'measure',
+          title: 'Coil at the control unit',
+          instruction: 'Measure the same pair at the control-unit connector.',
+          quantity: 'resistance',
+          spec: { kind: 'agree_with', checkId: 'coil', tolAbs: 5 },
+          outcomes: { in_spec: 'f-unit', low: 'f-harness', high: 'f-harness', open: 'f-harness' },
+        },
+        { id: 'f-coil', kind: 'finding', title: 'Coil', instruction: '', finding: { part: 'Coil', action: 'Replace' } },
+        { id: 'f-harness', kind: 'finding', title: 'Harness', instruction: '', finding: { part: 'Harness', action: 'Repair' } },
+        { id: 'f-unit', kind: 'finding', title: 'Unit', instruction: '', finding: { part: 'Unit', action: 'Replace' } },
+      ],
+    };
+    expect(validateProcedure(doc)).toEqual([]);
+  });
+
   it('reference_not_dominating: the referenced check comes later', () => {
     expectProblems(
       (d) => {
