@@ -1,7 +1,10 @@
 import { In, IsNull, Not } from 'typeorm';
+import { readProcedureFile, procedureFile } from '@shared/procedures/exchange-format';
+import type { ProcedureDocument } from '@shared/engine/procedure';
 import type { DraftDetail, ProcedureDetail, ProcedureSummary, VersionDetail, VersionSummary } from '@shared/api/procedure-types';
-import { createProcedureSchema, newDraftSchema, publishDraftSchema, saveDraftSchema } from '@shared/procedures/schemas';
-import type { CreateProcedureInput } from '@shared/procedures/schemas';
+import { copyDraftSchema, createProcedureSchema, newDraftSchema, publishDraftSchema, saveDraftSchema } from '@shared/procedures/schemas';
+import type { CreateProcedureInput, PublishDraftInput } from '@shared/procedures/schemas';
+import { Diagnosis } from '../diagnoses/diagnosis.entity';
 import { ApiError, notFound } from '../http/api-error';
 import type { AuthedRequest, RouteDef } from '../http/route';
 import { User } from '../users/user.entity';
@@ -19,11 +22,20 @@ const versionSummary = (v: ProcedureVersion, names: Map<string, string>): Versio
   checkCount: v.document.checks.length,
   publishedAt: v.publishedAt?.toISOString() ?? null,
   publishedBy: v.publishedById ? (names.get(v.publishedById) ?? null) : null,
+  note: v.note ?? null,
   updatedAt: v.updatedAt.toISOString(),
 });
 
-const summary = (p: Procedure, versions: ProcedureVersion[]): ProcedureSummary => {
+/** Per procedure, what the table shows beyond the procedure row: who touched it last and how often it ran. */
+interface Activity {
+  names: Map<string, string>;
+  runs: Map<string, number>;
+}
+
+const summary = (p: Procedure, versions: ProcedureVersion[], activity: Activity): ProcedureSummary => {
   const published = versions.filter((v) => v.status === 'published').map((v) => v.number!);
+  const numbered = versions.filter((v) => v.number !== null).sort((a, b) => b.number! - a.number!);
+  const last = versions.reduce<ProcedureVersion | null>((latest, v) => (!latest || v.updatedAt > latest.updatedAt ? v : latest), null);
   return {
     id: p.id,
     title: p.title,
@@ -31,9 +43,28 @@ const summary = (p: Procedure, versions: ProcedureVersion[]): ProcedureSummary =
     family: p.family,
     latestPublished: published.length ? Math.max(...published) : null,
     hasDraft: versions.some((v) => v.status === 'draft'),
+    latestVersion: numbered.length ? { number: numbered[0].number!, status: numbered[0].status === 'retired' ? 'retired' : 'published' } : null,
     createdAt: p.createdAt.toISOString(),
+    lastEditedAt: (last && last.updatedAt > p.createdAt ? last.updatedAt : p.createdAt).toISOString(),
+    lastEditedBy: activity.names.get(last?.updatedById ?? p.createdById) ?? null,
+    timesRun: versions.reduce((n, v) => n + (activity.runs.get(v.id) ?? 0), 0),
   };
 };
+
+/** Names of who last edited each version and diagnosis counts per version, in two queries for the whole list. */
+async function activityOf(ctx: Parameters<RouteDef['handler']>[2], shopId: string, versions: ProcedureVersion[], procedures: Procedure[]): Promise<Activity> {
+  const ids = [...new Set([...versions.map((v) => v.updatedById), ...procedures.map((p) => p.createdById)])];
+  const users = ids.length ? await ctx.ds.getRepository(User).find({ where: { id: In(ids), shopId }, select: { id: true, name: true } }) : [];
+  const counts: { versionId: string; n: number }[] = await ctx.ds
+    .getRepository(Diagnosis)
+    .createQueryBuilder('d')
+    .select('d.versionId', 'versionId')
+    .addSelect('COUNT(*)', 'n')
+    .where('d.shopId = :shopId', { shopId })
+    .groupBy('d.versionId')
+    .getRawMany();
+  return { names: new Map(users.map((u) => [u.id, u.name])), runs: new Map(counts.map((c) => [c.versionId, Number(c.n)])) };
+}
 
 async function findProcedure(req: AuthedRequest, ctx: Parameters<RouteDef['handler']>[2]) {
   const p = await ctx.ds.getRepository(Procedure).findOneBy({ id: String(req.params.id), shopId: req.member.shopId });
@@ -50,6 +81,29 @@ const versionNumber = (raw: unknown) => {
 const staleDraft = (current: number) =>
   new ApiError(409, 'stale_revision', `Someone saved this draft since you opened it (it is now revision ${current}). Reload it, then make your change again.`);
 
+/** A new procedure whose first draft holds `document`, in one transaction: all of it is stored or none. */
+async function createWithDraft(ctx: Parameters<RouteDef['handler']>[2], req: AuthedRequest, meta: CreateProcedureInput, document: ProcedureDocument) {
+  return ctx.write(async (tx) => {
+    const procedure = await tx.getRepository(Procedure).save({ ...meta, shopId: req.member.shopId, createdById: req.member.id });
+    const draft = await tx.getRepository(ProcedureVersion).save({
+      shopId: req.member.shopId,
+      procedureId: procedure.id,
+      status: 'draft',
+      number: null,
+      revision: 1,
+      document,
+      updatedById: req.member.id,
+      publishedAt: null,
+      publishedById: null,
+      note: null,
+      retiredAt: null,
+    });
+    return { procedure, draft };
+  });
+}
+
+const copyTitle = (title: string) => (title.length > 113 ? title.slice(0, 113) : title) + ' (copy)';
+
 export const procedureRoutes: RouteDef[] = [
   {
     method: 'get',
@@ -60,11 +114,12 @@ export const procedureRoutes: RouteDef[] = [
       const procedures = await ctx.ds.getRepository(Procedure).find({ where: { shopId: req.member.shopId }, order: { title: 'ASC' } });
       const versions = await ctx.ds.getRepository(ProcedureVersion).find({
         where: { shopId: req.member.shopId },
-        select: { id: true, procedureId: true, status: true, number: true },
+        select: { id: true, procedureId: true, status: true, number: true, updatedAt: true, updatedById: true },
       });
       const byProcedure = new Map<string, ProcedureVersion[]>();
       for (const v of versions) byProcedure.set(v.procedureId, [...(byProcedure.get(v.procedureId) ?? []), v]);
-      const list = procedures.map((p) => summary(p, byProcedure.get(p.id) ?? []));
+      const activity = await activityOf(ctx, req.member.shopId, versions, procedures);
+      const list = procedures.map((p) => summary(p, byProcedure.get(p.id) ?? [], activity));
       res.json({ procedures: req.member.role === 'tech' ? list.filter((p) => p.latestPublished !== null) : list });
     },
   },
@@ -75,24 +130,54 @@ export const procedureRoutes: RouteDef[] = [
     roles: AUTHORS,
     body: createProcedureSchema,
     async handler(req, res, ctx) {
-      const input = req.body as CreateProcedureInput;
-      const { procedure, draft } = await ctx.write(async (tx) => {
-        const procedure = await tx.getRepository(Procedure).save({ ...input, shopId: req.member.shopId, createdById: req.member.id });
-        const draft = await tx.getRepository(ProcedureVersion).save({
-          shopId: req.member.shopId,
-          procedureId: procedure.id,
-          status: 'draft',
-          number: null,
-          revision: 1,
-          document: starterDocument(),
-          updatedById: req.member.id,
-          publishedAt: null,
-          publishedById: null,
-          retiredAt: null,
-        });
-        return { procedure, draft };
-      });
-      res.status(201).json({ procedure: summary(procedure, [draft]) });
+      const { procedure, draft } = await createWithDraft(ctx, req, req.body as CreateProcedureInput, starterDocument());
+      res.status(201).json({ procedure: summary(procedure, [draft], await activityOf(ctx, req.member.shopId, [draft], [procedure])) });
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/procedures/import',
+    summary: 'Import a procedure file (format probepath.procedure, version 1) as a new procedure with a draft; refused whole, with every error, when anything is wrong.',
+    roles: AUTHORS,
+    async handler(req, res, ctx) {
+      const file = readProcedureFile(req.body);
+      if (!file.ok) {
+        const shown = file.errors.slice(0, 5).join(' ');
+        const more = file.errors.length > 5 ? ` (and ${file.errors.length - 5} more)` : '';
+        throw new ApiError(400, 'invalid_procedure_file', `Nothing was imported. ${shown}${more}`, undefined, { errors: file.errors.slice(0, 100) });
+      }
+      const { procedure, draft } = await createWithDraft(ctx, req, { title: file.title, complaint: file.complaint, family: file.family }, file.document);
+      res.status(201).json({ procedure: summary(procedure, [draft], await activityOf(ctx, req.member.shopId, [draft], [procedure])) });
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/procedures/:id/copy',
+    summary: 'A new procedure, titled "… (copy)", whose draft is the document sent: how an editor keeps its changes after a conflicting save.',
+    roles: AUTHORS,
+    body: copyDraftSchema,
+    async handler(req, res, ctx) {
+      const p = await findProcedure(req, ctx);
+      const document = readDocument((req.body as { document: unknown }).document);
+      const { procedure, draft } = await createWithDraft(ctx, req, { title: copyTitle(p.title), complaint: p.complaint, family: p.family }, document);
+      res.status(201).json({ procedure: summary(procedure, [draft], await activityOf(ctx, req.member.shopId, [draft], [procedure])) });
+    },
+  },
+  {
+    method: 'get',
+    path: '/api/procedures/:id/export',
+    summary: 'The procedure as a probepath.procedure file: ?version=N, or the latest published version, or the draft when none is published.',
+    roles: AUTHORS,
+    async handler(req, res, ctx) {
+      const p = await findProcedure(req, ctx);
+      const repo = ctx.ds.getRepository(ProcedureVersion);
+      const v = req.query.version !== undefined
+        ? await repo.findOneBy({ procedureId: p.id, number: versionNumber(req.query.version) })
+        : ((await repo.findOne({ where: { procedureId: p.id, status: 'published' }, order: { number: 'DESC' } })) ?? (await repo.findOneBy({ procedureId: p.id, status: 'draft' })));
+      if (!v) throw notFound('version');
+      const name = p.title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'procedure';
+      res.setHeader('Content-Disposition', `attachment; filename="${name}-${v.number === null ? 'draft' : `v${v.number}`}.probepath.json"`);
+      res.json(procedureFile(p, v.number === null ? 'draft' : String(v.number), v.document));
     },
   },
   {
@@ -106,7 +191,7 @@ export const procedureRoutes: RouteDef[] = [
       const names = await userNames(ctx, versions);
       const visible = req.member.role === 'tech' ? versions.filter((v) => v.status !== 'draft') : versions;
       if (req.member.role === 'tech' && !visible.some((v) => v.status === 'published')) throw notFound('procedure');
-      const detail: ProcedureDetail = { ...summary(p, versions), versions: visible.map((v) => versionSummary(v, names)) };
+      const detail: ProcedureDetail = { ...summary(p, versions, await activityOf(ctx, req.member.shopId, versions, [p])), versions: visible.map((v) => versionSummary(v, names)) };
       res.json({ procedure: detail });
     },
   },
@@ -174,6 +259,7 @@ export const procedureRoutes: RouteDef[] = [
           updatedById: req.member.id,
           publishedAt: null,
           publishedById: null,
+          note: null,
           retiredAt: null,
         });
       });
@@ -221,7 +307,7 @@ export const procedureRoutes: RouteDef[] = [
     body: publishDraftSchema,
     async handler(req, res, ctx) {
       const p = await findProcedure(req, ctx);
-      const { revision } = req.body as { revision: number };
+      const { revision, note } = req.body as PublishDraftInput;
       const number = await ctx.write(async (tx) => {
         const repo = tx.getRepository(ProcedureVersion);
         const draft = await repo.findOneBy({ procedureId: p.id, status: 'draft' });
@@ -233,7 +319,7 @@ export const procedureRoutes: RouteDef[] = [
         }
         const last = await repo.findOne({ where: { procedureId: p.id, number: Not(IsNull()) }, order: { number: 'DESC' } });
         const next = (last?.number ?? 0) + 1;
-        await repo.update({ id: draft.id }, { status: 'published', number: next, publishedAt: new Date(), publishedById: req.member.id });
+        await repo.update({ id: draft.id }, { status: 'published', number: next, publishedAt: new Date(), publishedById: req.member.id, note: note || null });
         return next;
       });
       res.json({ version: number });

@@ -10,6 +10,8 @@ export interface VersionSummary {
   checkCount: number;
   publishedAt: string | null;
   publishedBy: string | null;
+  /** What changed, as written by whoever published it. */
+  note: string | null;
   updatedAt: string;
 }
 
@@ -21,7 +23,14 @@ export interface ProcedureSummary {
   /** Highest published (not retired) version a diagnosis can start on, if any. */
   latestPublished: number | null;
   hasDraft: boolean;
+  /** The highest-numbered version and its state (published or retired), if any was ever published. */
+  latestVersion: { number: number; status: 'published' | 'retired' } | null;
   createdAt: string;
+  /** The most recent change to any version: a draft save, a publish or a retirement. */
+  lastEditedAt: string;
+  lastEditedBy: string | null;
+  /** Diagnoses started on any of its versions. */
+  timesRun: number;
 }
 
 export interface ProcedureDetail extends ProcedureSummary {

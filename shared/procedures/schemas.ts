@@ -23,7 +23,15 @@ export const saveDraftSchema = yup.object({
   document: yup.mixed().required('Send the procedure document.'),
 });
 
-export const publishDraftSchema = yup.object({ revision });
+/** Keep an editor's document as a new procedure (after a conflicting save). */
+export const copyDraftSchema = yup.object({ document: yup.mixed().required('Send the procedure document.') });
+
+export const publishDraftSchema = yup.object({
+  revision,
+  /** The editor asks for it; older API clients may leave it out. */
+  note: text('Change note', 1000).default(''),
+});
+export type PublishDraftInput = yup.InferType<typeof publishDraftSchema>;
 
 export const newDraftSchema = yup.object({
   fromVersion: yup.number().typeError('fromVersion is a version number.').integer().min(1).required('Say which published version to start from.'),
