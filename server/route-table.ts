@@ -8,6 +8,7 @@ import { machineRoutes } from './machines/machines.routes';
 import { mailRoutes } from './mail/mail.routes';
 import { memberRoutes } from './members/members.routes';
 import { meterRoutes } from './meters/meters.routes';
+import { photoRoutes } from './photos/photos.routes';
 import { procedureRoutes } from './procedures/procedures.routes';
 import { commentRoutes } from './replays/comments.routes';
 import { practiceRoutes } from './replays/practice.routes';
@@ -28,6 +29,7 @@ export const routeTable: readonly RouteDef[] = [
   ...meterRoutes,
   ...procedureRoutes,
   ...diagnosisRoutes,
+  ...photoRoutes,
   ...commentRoutes,
   ...practiceRoutes,
 ];

@@ -8,6 +8,7 @@ import type { AuthedRequest, RouteDef } from '../http/route';
 import { answerOnce, answerOnceSync } from '../idempotency/with-idempotency';
 import { Job } from '../jobs/job.entity';
 import { Meter } from '../meters/meter.entity';
+import { DiagnosisPhoto } from '../photos/photo.entity';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
 import { Procedure } from '../procedures/procedure.entity';
 import { DiagnosisStep } from './diagnosis-step.entity';
@@ -21,7 +22,7 @@ const STATUSES = new Set(['open', 'concluded', 'abandoned']);
 const RELATIONS = { version: { procedure: true }, machine: true, job: true, meter: true, startedBy: true } as const;
 
 /** Apprentices learn from concluded diagnoses only; everything else is shop-wide for the other roles. */
-async function loadDiagnosis(m: EntityManager, req: AuthedRequest): Promise<LoadedDiagnosis> {
+export async function loadDiagnosis(m: EntityManager, req: AuthedRequest): Promise<LoadedDiagnosis> {
   const d = await m.getRepository(Diagnosis).findOne({ where: { id: String(req.params.id), shopId: req.member.shopId }, relations: RELATIONS });
   if (!d || (req.member.role === 'apprentice' && d.status !== 'concluded')) throw notFound('diagnosis');
   return d as LoadedDiagnosis;
@@ -31,8 +32,12 @@ function requireOpen(d: { status: string }) {
   if (d.status !== 'open') throw new ApiError(409, 'diagnosis_closed', `This diagnosis is ${d.status}; it takes no more steps.`);
 }
 
-async function stepsOf(m: EntityManager, diagnosisId: string) {
+export async function stepsOf(m: EntityManager, diagnosisId: string) {
   return m.getRepository(DiagnosisStep).find({ where: { diagnosisId }, relations: { by: true }, order: { seq: 'ASC' } });
+}
+
+export async function photosOf(m: EntityManager, diagnosisId: string) {
+  return m.getRepository(DiagnosisPhoto).find({ where: { diagnosisId }, order: { createdAt: 'ASC' } });
 }
 
 export const diagnosisRoutes: RouteDef[] = [
@@ -105,7 +110,7 @@ export const diagnosisRoutes: RouteDef[] = [
           endedAt: null,
         });
         const loaded = await tx.getRepository(Diagnosis).findOneOrFail({ where: { id: saved.id }, relations: RELATIONS });
-        return { status: 201, body: { diagnosis: toDetail(loaded as LoadedDiagnosis, []) } };
+        return { status: 201, body: { diagnosis: toDetail(loaded as LoadedDiagnosis, [], []) } };
       });
     },
   },
@@ -116,7 +121,7 @@ export const diagnosisRoutes: RouteDef[] = [
     roles: EVERYONE,
     async handler(req, res, ctx) {
       const d = await loadDiagnosis(ctx.ds.manager, req);
-      res.json({ diagnosis: toDetail(d, await stepsOf(ctx.ds.manager, d.id)) });
+      res.json({ diagnosis: toDetail(d, await stepsOf(ctx.ds.manager, d.id), await photosOf(ctx.ds.manager, d.id)) });
     },
   },
   {

@@ -2,6 +2,8 @@ import type { DiagnosisDetail, DiagnosisSummary, StepView } from '@shared/api/di
 import type { Evaluation } from '@shared/engine/evaluate';
 import { toJobView } from '../jobs/jobs.routes';
 import { toMeterView } from '../meters/meters.routes';
+import type { DiagnosisPhoto } from '../photos/photo.entity';
+import { toPhotoView } from '../photos/photo-views';
 import type { Procedure } from '../procedures/procedure.entity';
 import type { ProcedureVersion } from '../procedures/procedure-version.entity';
 import type { User } from '../users/user.entity';
@@ -51,7 +53,7 @@ export function toSummary(d: LoadedDiagnosis, stepCount: number): DiagnosisSumma
   };
 }
 
-export function toDetail(d: LoadedDiagnosis, steps: (DiagnosisStep & { by: User })[]): DiagnosisDetail {
+export function toDetail(d: LoadedDiagnosis, steps: (DiagnosisStep & { by: User })[], photos: DiagnosisPhoto[]): DiagnosisDetail {
   return {
     ...toSummary(d, steps.filter((s) => !s.retracted).length),
     ambientC: d.ambientC,
@@ -59,6 +61,7 @@ export function toDetail(d: LoadedDiagnosis, steps: (DiagnosisStep & { by: User 
     meter: toMeterView(d.meter),
     document: d.version.document,
     steps: steps.map((s) => toStepView(s, s.by.name)),
+    photos: photos.map(toPhotoView),
     conclusion: d.conclusion,
     abandonReason: d.abandonReason,
   };

@@ -19,12 +19,12 @@ interface Attempt {
   fingerprint: string;
 }
 
-function attemptOf(req: AuthedRequest): Attempt {
+function attemptOf(req: AuthedRequest, content: unknown = req.body): Attempt {
   const key = req.get('idempotency-key');
   if (key !== undefined && !KEY.test(key)) {
     throw new ApiError(400, 'invalid_idempotency_key', 'Idempotency-Key is 8 to 100 letters, digits, - or _.');
   }
-  const bodyHash = crypto.createHash('sha256').update(JSON.stringify(req.body ?? null)).digest('hex');
+  const bodyHash = crypto.createHash('sha256').update(JSON.stringify(content ?? null)).digest('hex');
   return { key, fingerprint: `${req.method} ${req.originalUrl.split('?')[0]} ${bodyHash}` };
 }
 
@@ -69,8 +69,15 @@ function send(res: Response, answer: Answer, replayed: boolean) {
  * that answer again; the same key with another body is refused. Without a key
  * the write simply runs.
  */
-export async function answerOnce(ctx: AppContext, req: AuthedRequest, res: Response, work: (tx: EntityManager) => Promise<Answer>) {
-  const a = attemptOf(req);
+export async function answerOnce(
+  ctx: AppContext,
+  req: AuthedRequest,
+  res: Response,
+  work: (tx: EntityManager) => Promise<Answer>,
+  /** What the key stands for beyond method and path: the JSON body, or e.g. an upload's fields and file hash. */
+  content: unknown = req.body,
+) {
+  const a = attemptOf(req, content);
   const result = await ctx.write(async (tx) => {
     const previous = previousAnswer(ctx, req, a);
     if (previous) return { answer: previous, replayed: true };

@@ -24,6 +24,15 @@ export interface StepView {
   retractedAt: string | null;
 }
 
+/** A photo of a step (stepId) or of the diagnosis as a whole (stepId null); its bytes are at /api/photos/:id. */
+export interface PhotoView {
+  id: string;
+  stepId: string | null;
+  contentType: string;
+  size: number;
+  createdAt: string;
+}
+
 export interface ConclusionView {
   findingCheckId: string;
   note: string;
@@ -56,6 +65,8 @@ export interface DiagnosisDetail extends DiagnosisSummary {
   /** The pinned version's document: every check the path can visit. */
   document: ProcedureDocument;
   steps: StepView[];
+  /** Oldest first. */
+  photos: PhotoView[];
   conclusion: ConclusionView | null;
   abandonReason: string | null;
 }
