@@ -3,12 +3,16 @@ import { useSWRConfig } from 'swr';
 import type { SessionUser, SignInResponse } from '@shared/api/types';
 import { ME_KEY, useMe } from '@/hooks/use-me';
 import { type ApiError, setAuthToken, setUnauthorizedHandler } from '@/lib/api';
+import { readJSON, removeKey, writeJSON } from '@/lib/device-storage';
 import { clearToken, readToken, writeToken } from '@/lib/token-store';
+
+/** The user the stored token belongs to, so a reload without signal still opens the shop. */
+const REMEMBERED_USER = 'probepath.session-user';
 
 type SessionState =
   | { status: 'loading' }
   | { status: 'signed-out' }
-  | { status: 'signed-in'; user: SessionUser }
+  | { status: 'signed-in'; user: SessionUser; unreachable: { error: ApiError; retry: () => void } | null }
   | { status: 'unreachable'; error: ApiError; retry: () => void };
 
 interface SessionContextValue {
@@ -25,7 +29,8 @@ export function SessionProvider({ children }: { children: ReactNode }) {
   const { mutate } = useSWRConfig();
   // undefined while the stored token is still being read.
   const [token, setToken] = useState<string | null | undefined>(undefined);
-  const me = useMe(Boolean(token));
+  const [remembered, setRemembered] = useState(() => readJSON<SessionUser>(REMEMBERED_USER));
+  const me = useMe(Boolean(token), remembered);
 
   useEffect(() => {
     void readToken().then((stored) => {
@@ -39,6 +44,8 @@ export function SessionProvider({ children }: { children: ReactNode }) {
   const signOut = useCallback(async () => {
     setAuthToken(null);
     setToken(null);
+    setRemembered(null);
+    removeKey(REMEMBERED_USER);
     await clearToken();
     await clearCache();
   }, [clearCache]);
@@ -54,6 +61,10 @@ export function SessionProvider({ children }: { children: ReactNode }) {
     [clearCache, mutate],
   );
 
+  useEffect(() => {
+    if (token && me.data && !me.isValidating) writeJSON(REMEMBERED_USER, me.data.user);
+  }, [token, me.data, me.isValidating]);
+
   // The server refused the token (expired, or the member was deactivated): drop the session.
   useEffect(() => {
     setUnauthorizedHandler(() => void signOut());
@@ -63,7 +74,10 @@ export function SessionProvider({ children }: { children: ReactNode }) {
   const session = useMemo<SessionState>(() => {
     if (token === undefined) return { status: 'loading' };
     if (token === null) return { status: 'signed-out' };
-    if (me.data) return { status: 'signed-in', user: me.data.user };
+    if (me.data) {
+      const unreachable = me.error && me.error.status !== 401 ? { error: me.error, retry: () => void me.mutate() } : null;
+      return { status: 'signed-in', user: me.data.user, unreachable };
+    }
     if (me.error && me.error.status !== 401) return { status: 'unreachable', error: me.error, retry: () => void me.mutate() };
     return { status: 'loading' };
   }, [token, me.data, me.error, me.mutate]);

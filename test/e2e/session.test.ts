@@ -92,11 +92,21 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     await page.getByTestId('error-state').waitFor({ state: 'detached' });
     await page.getByTestId('empty-state').waitFor();
 
-    // A session check that cannot reach the server keeps the session and offers a retry.
+    // A session check that cannot reach the server keeps the session from this device, says so and offers a retry.
+    await page.route('**/api/auth/me', (route) => route.abort());
+    await page.reload();
+    await page.getByTestId('session-offline').waitFor();
+    await page.getByTestId('outbox-screen').waitFor();
+    await shot(page, size, 'session-unreachable');
+    await page.unroute('**/api/auth/me');
+    await page.getByTestId('session-retry').click();
+    await page.getByTestId('session-offline').waitFor({ state: 'detached' });
+
+    // A first visit with nothing remembered and no server shows the failure in words, with a retry.
+    await page.evaluate(() => localStorage.removeItem('probepath.session-user'));
     await page.route('**/api/auth/me', (route) => route.abort());
     await page.reload();
     await page.getByTestId('error-state').waitFor();
-    await shot(page, size, 'session-unreachable');
     await page.unroute('**/api/auth/me');
     await page.getByTestId('retry').click();
     await page.getByTestId('outbox-screen').waitFor();

@@ -8,6 +8,7 @@ import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Text } from '@/components/ui/text';
+import { OfflineBanner } from '@/features/shell/offline-banner';
 import { SECTION_NAV } from '@/features/shell/sections';
 import { useSession } from '@/lib/session';
 import { layout, space, useBreakpoints, useTheme } from '@/lib/theme';
@@ -31,10 +32,11 @@ export function SignedInShell() {
       </View>
     );
   }
-  return <Shell user={session.user} />;
+  return <Shell user={session.user} onRetry={session.unreachable?.retry ?? null} />;
 }
 
-function Shell({ user }: { user: SessionUser }) {
+/** `onRetry` is set while the server can't be reached; the page then runs from what the device holds. */
+function Shell({ user, onRetry }: { user: SessionUser; onRetry: (() => void) | null }) {
   const { isWide } = useBreakpoints();
   const colors = useTheme();
   const router = useRouter();
@@ -93,6 +95,7 @@ function Shell({ user }: { user: SessionUser }) {
           </View>
         </View>
         <View role="main" style={styles.fill}>
+          {onRetry ? <OfflineBanner onRetry={onRetry} /> : null}
           <Slot />
         </View>
       </View>
@@ -116,6 +119,7 @@ function Shell({ user }: { user: SessionUser }) {
         />
       </View>
       <View role="main" style={styles.fill}>
+        {onRetry ? <OfflineBanner onRetry={onRetry} /> : null}
         <Slot />
       </View>
       <View

@@ -1,0 +1,24 @@
+import { StyleSheet, View } from 'react-native';
+import { Button } from '@/components/ui/button';
+import { Icon } from '@/components/ui/icon';
+import { Text } from '@/components/ui/text';
+import { space, useTheme } from '@/lib/theme';
+
+/** Above every page while the session check can't reach the server: the shop stays open from this device. */
+export function OfflineBanner({ onRetry }: { onRetry: () => void }) {
+  const colors = useTheme();
+  return (
+    <View testID="session-offline" role="status" style={[styles.bar, { backgroundColor: colors.warningSoft, borderBottomColor: colors.warning }]}>
+      <Icon name="unplugged" color={colors.warning} />
+      <Text variant="small" style={styles.message}>
+        Can't reach Probepath. Readings you record are kept on this device and sent when the connection is back.
+      </Text>
+      <Button testID="session-retry" label="Try again" variant="quiet" onPress={onRetry} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  bar: { flexDirection: 'row', alignItems: 'center', gap: space.md, paddingLeft: space.lg, paddingRight: space.xs, paddingVertical: space.xs, borderBottomWidth: 2 },
+  message: { flex: 1 },
+});
