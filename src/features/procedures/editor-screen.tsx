@@ -1,0 +1,211 @@
+import Head from 'expo-router/head';
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useMemo, useState } from 'react';
+import { ScrollView, StyleSheet, TextInput, View } from 'react-native';
+import type { DraftDetail } from '@shared/api/procedure-types';
+import { addCheck, deleteCheck, replaceCheck, setStart } from '@shared/editor/document-edits';
+import { CHECK_KINDS } from '@shared/engine/procedure';
+import { Button } from '@/components/ui/button';
+import { EmptyState } from '@/components/ui/empty-state';
+import { ErrorState } from '@/components/ui/error-state';
+import { FormError } from '@/components/ui/form-error';
+import { LoadingState } from '@/components/ui/loading-state';
+import { Heading, Text } from '@/components/ui/text';
+import { CheckFormPanel } from '@/features/procedures/components/check-form-panel';
+import { CheckList } from '@/features/procedures/components/check-list';
+import { OutcomesEditor } from '@/features/procedures/components/outcomes-editor';
+import { ProblemsPanel } from '@/features/procedures/components/problems-panel';
+import { ProcedureDiagram } from '@/features/procedures/components/procedure-diagram';
+import { useDraftEditor } from '@/features/procedures/use-draft-editor';
+import { useUndoKeys } from '@/features/procedures/use-undo-keys';
+import { useDraft, useProcedure } from '@/hooks/use-procedures';
+import { api, ApiError } from '@/lib/api';
+import { radius, space, type, useTheme } from '@/lib/theme';
+
+export function EditorScreen() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const router = useRouter();
+  const procedure = useProcedure(id);
+  const draft = useDraft(id);
+  const colors = useTheme();
+  const title = procedure.data?.procedure.title ?? 'Procedure';
+  const noDraft = draft.error instanceof ApiError && draft.error.status === 404 && draft.error.code === 'no_draft';
+  return (
+    <View style={[styles.screen, { backgroundColor: colors.background }]} testID="editor-screen">
+      <Head>
+        <title>{`${title} · Probepath`}</title>
+      </Head>
+      {procedure.error ? (
+        <ErrorState title="Couldn't open the procedure" error={procedure.error} onRetry={() => void procedure.mutate()} />
+      ) : noDraft && procedure.data ? (
+        <EmptyState
+          testID="no-draft"
+          icon="procedures"
+          title="No draft to edit"
+          body={`${title} has no draft. Start one from its latest version; the published versions stay as they are.`}
+          action={
+            procedure.data.procedure.latestVersion
+              ? {
+                  label: `New draft from version ${procedure.data.procedure.latestVersion.number}`,
+                  testID: 'new-draft',
+                  onPress: async () => {
+                    await api(`/api/procedures/${id}/draft`, 'POST', { fromVersion: procedure.data!.procedure.latestVersion!.number });
+                    await draft.mutate();
+                  },
+                }
+              : undefined
+          }
+        />
+      ) : draft.error ? (
+        <ErrorState title="Couldn't open the draft" error={draft.error} onRetry={() => void draft.mutate()} />
+      ) : !draft.data || !procedure.data ? (
+        <LoadingState label="Opening the draft…" />
+      ) : (
+        <Editor key={draft.data.draft.revision} procedureId={id} title={title} loaded={draft.data.draft} onCopied={(copyId) => router.replace(`/procedures/${copyId}`)} onBack={() => router.navigate('/procedures')} />
+      )}
+    </View>
+  );
+}
+
+function Editor({ procedureId, title, loaded, onCopied, onBack }: { procedureId: string; title: string; loaded: DraftDetail; onCopied: (id: string) => void; onBack: () => void }) {
+  const colors = useTheme();
+  const editor = useDraftEditor(procedureId, loaded);
+  const { document, problems } = editor;
+  const [selectedId, setSelectedId] = useState<string | null>(document.startCheckId);
+  const [note, setNote] = useState('');
+  const [publishing, setPublishing] = useState(false);
+  const [message, setMessage] = useState<{ tone: 'error' | 'done'; text: string } | null>(null);
+  useUndoKeys(editor.undo, editor.redo);
+  const flagged = useMemo(() => new Set(problems.map((p) => p.checkId)), [problems]);
+  const selected = document.checks.find((c) => c.id === selectedId) ?? null;
+
+  const publish = async () => {
+    setPublishing(true);
+    setMessage(null);
+    try {
+      const result = await api<{ version: number }>(`/api/procedures/${procedureId}/draft/publish`, 'POST', { revision: editor.revision, note: note.trim() });
+      setMessage({ tone: 'done', text: `Published as version ${result.version}. Technicians can start it now.` });
+      onBack();
+    } catch (error) {
+      setMessage({ tone: 'error', text: error instanceof Error ? error.message : 'Publishing failed. Try again.' });
+    } finally {
+      setPublishing(false);
+    }
+  };
+  const keepCopy = async () => {
+    try {
+      const { procedure } = await api<{ procedure: { id: string } }>(`/api/procedures/${procedureId}/copy`, 'POST', { document });
+      onCopied(procedure.id);
+    } catch (error) {
+      setMessage({ tone: 'error', text: error instanceof Error ? error.message : 'The copy could not be made. Try again.' });
+    }
+  };
+
+  const saveWords = { saved: 'All changes saved', pending: 'Unsaved changes…', saving: 'Saving…', conflict: 'Not saved: conflict', failed: 'Not saved' }[editor.save.kind];
+  const canPublish = problems.length === 0 && editor.isSaved && note.trim().length > 0;
+
+  return (
+    <View style={styles.editor}>
+      <View style={[styles.header, { borderBottomColor: colors.border, backgroundColor: colors.surface }]}>
+        <Button testID="editor-back" label="Procedures" icon="back" variant="quiet" onPress={onBack} />
+        <View style={styles.titles}>
+          <Heading>{title}</Heading>
+          <Text variant="small" tone="textMuted" testID="save-state">
+            {`Draft, revision ${editor.revision} · ${saveWords}`}
+          </Text>
+        </View>
+        <Button testID="undo" label="Undo" disabled={!editor.canUndo} onPress={editor.undo} />
+        <Button testID="redo" label="Redo" disabled={!editor.canRedo} onPress={editor.redo} />
+        <TextInput
+          testID="publish-note"
+          aria-label="Change note for this version"
+          placeholder="What changed in this version?"
+          placeholderTextColor={colors.textMuted}
+          value={note}
+          onChangeText={setNote}
+          style={[styles.note, type.body, { color: colors.text, borderColor: colors.borderStrong, backgroundColor: colors.surface }]}
+        />
+        <Button
+          testID="publish"
+          variant="primary"
+          label="Publish"
+          ariaLabel={problems.length ? `Publish (fix ${problems.length} problems first)` : 'Publish'}
+          disabled={!canPublish}
+          loading={publishing}
+          onPress={() => void publish()}
+        />
+      </View>
+      {editor.save.kind === 'conflict' ? (
+        <View style={[styles.banner, { backgroundColor: colors.warningSoft }]} role="alert" testID="conflict">
+          <Text style={styles.grow}>{`${editor.save.message} Your changes are still here and were not saved.`}</Text>
+          <Button testID="conflict-reload" label="Reload theirs" onPress={() => void editor.reload()} />
+          <Button testID="conflict-copy" label="Keep mine as a copy" variant="primary" onPress={() => void keepCopy()} />
+        </View>
+      ) : editor.save.kind === 'failed' ? (
+        <View style={[styles.banner, { backgroundColor: colors.dangerSoft }]} role="alert" testID="save-failed">
+          <Text style={styles.grow}>{`${editor.save.message} Your changes are kept on this screen.`}</Text>
+          <Button testID="save-retry" label="Try saving again" onPress={editor.retry} />
+        </View>
+      ) : null}
+      {message ? <View style={styles.message}>{message.tone === 'error' ? <FormError message={message.text} /> : <Text tone="success">{message.text}</Text>}</View> : null}
+      <View style={styles.columns}>
+        <ScrollView style={[styles.left, { borderRightColor: colors.border }]} contentContainerStyle={styles.pad}>
+          <View style={styles.addRow}>
+            {CHECK_KINDS.map((k) => (
+              <Button key={k} testID={`add-${k}`} label={k} icon="plus" onPress={() => {
+                const added = addCheck(document, k);
+                editor.edit(added.document);
+                setSelectedId(added.id);
+              }} />
+            ))}
+          </View>
+          <ProblemsPanel problems={problems} onSelect={setSelectedId} />
+          <CheckList document={document} selectedId={selectedId} flagged={flagged} onSelect={setSelectedId} />
+        </ScrollView>
+        <View style={styles.middle}>
+          <ProcedureDiagram document={document} selectedId={selectedId} flagged={flagged} onSelect={setSelectedId} />
+        </View>
+        <ScrollView style={[styles.right, { borderLeftColor: colors.border }]} contentContainerStyle={styles.pad}>
+          {selected ? (
+            <>
+              <CheckFormPanel key={`${selected.id}:${editor.epoch}`} check={selected} document={document} onChange={(next, group) => editor.edit(replaceCheck(document, selected.id, next), group)} />
+              <OutcomesEditor check={selected} document={document} onEdit={(next) => editor.edit(next)} onSelect={setSelectedId} />
+              <View style={styles.addRow}>
+                {selected.id !== document.startCheckId ? <Button testID="make-start" label="Make this the start" onPress={() => editor.edit(setStart(document, selected.id))} /> : null}
+                <Button
+                  testID="delete-check"
+                  variant="danger"
+                  label="Delete check"
+                  disabled={document.checks.length === 1}
+                  onPress={() => {
+                    editor.edit(deleteCheck(document, selected.id));
+                    setSelectedId(null);
+                  }}
+                />
+              </View>
+            </>
+          ) : (
+            <Text tone="textMuted">Select a check in the list or the diagram to edit it.</Text>
+          )}
+        </ScrollView>
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  screen: { flex: 1 },
+  editor: { flex: 1 },
+  header: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md, paddingHorizontal: space.lg, paddingVertical: space.sm, borderBottomWidth: 1 },
+  titles: { flex: 1, minWidth: 200 },
+  note: { minHeight: 48, minWidth: 260, borderWidth: 1, borderRadius: radius.md, paddingHorizontal: space.md },
+  banner: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md, padding: space.md },
+  message: { padding: space.md },
+  grow: { flex: 1, minWidth: 240 },
+  columns: { flex: 1, flexDirection: 'row' },
+  left: { width: 320, flexGrow: 0, borderRightWidth: 1 },
+  middle: { flex: 1, padding: space.md },
+  right: { width: 440, flexGrow: 0, borderLeftWidth: 1 },
+  pad: { padding: space.md, gap: space.lg },
+  addRow: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
+});
