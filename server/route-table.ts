@@ -10,6 +10,7 @@ import { memberRoutes } from './members/members.routes';
 import { meterRoutes } from './meters/meters.routes';
 import { photoRoutes } from './photos/photos.routes';
 import { procedureRoutes } from './procedures/procedures.routes';
+import { reportRoutes } from './report/report.routes';
 import { commentRoutes } from './replays/comments.routes';
 import { practiceRoutes } from './replays/practice.routes';
 
@@ -30,6 +31,7 @@ export const routeTable: readonly RouteDef[] = [
   ...procedureRoutes,
   ...diagnosisRoutes,
   ...photoRoutes,
+  ...reportRoutes,
   ...commentRoutes,
   ...practiceRoutes,
 ];

@@ -100,3 +100,34 @@ export async function answerOnceSync(ctx: AppContext, req: AuthedRequest, res: R
   });
   send(res, result.answer, result.replayed);
 }
+
+const inFlight = new Map<string, Promise<unknown>>();
+
+/**
+ * For a write whose effect leaves the database and itself needs the write
+ * queue (mail through the local fake files the message in the outbox table),
+ * so it cannot run inside a queued transaction: the stored answer is looked up
+ * first, the effect runs outside the queue, and its answer is stored after.
+ * Requests with the same key wait for each other, so two retries never both
+ * run the effect. A failed effect stores nothing, so a retry tries again.
+ */
+export async function answerOnceAfter(ctx: AppContext, req: AuthedRequest, res: Response, effect: () => Promise<Answer>) {
+  const a = attemptOf(req);
+  if (!a.key) return send(res, await effect(), false);
+  const slot = `${req.member.shopId}|${req.member.id}|${a.key}`;
+  while (inFlight.has(slot)) await inFlight.get(slot)!.catch(() => undefined);
+  const run = (async () => {
+    const previous = await ctx.writeSync(() => previousAnswer(ctx, req, a));
+    if (previous) return { answer: previous, replayed: true };
+    const answer = await effect();
+    await ctx.writeSync(() => remember(ctx, req, a, answer));
+    return { answer, replayed: false };
+  })();
+  inFlight.set(slot, run);
+  try {
+    const result = await run;
+    send(res, result.answer, result.replayed);
+  } finally {
+    inFlight.delete(slot);
+  }
+}
