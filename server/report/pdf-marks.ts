@@ -48,36 +48,27 @@ export function drawSpecBar(doc: Doc, x: number, y: number, width: number, m: { 
   doc.restore();
 }
 
-/** Each verdict has its own shape beside its word, so the report never relies on colour. */
+/**
+ * Each verdict has its own shape beside its word, so the report never relies on colour: the same drawings
+ * as the app's verdict icons (src/components/ui/icon.tsx), on their 24-unit grid.
+ */
+const VERDICT_PATHS: Record<Verdict, { fill?: string; stroke: string[] }> = {
+  in_spec: { fill: 'M21.5 12a9.5 9.5 0 1 1-19 0a9.5 9.5 0 1 1 19 0z', stroke: ['M7.5 12.5l3 3 6-6.5'] },
+  low: { fill: 'M3 6.5h18L12 20z', stroke: [] },
+  high: { fill: 'M3 17.5h18L12 4z', stroke: [] },
+  open: { stroke: ['M2 12h6M16 12h6M8 12l7-5.5'] },
+  marginal: { fill: 'M12 2l10 10-10 10L2 12z', stroke: ['M7.5 12.5c1.5-2 3-2 4.5 0s3 2 4.5 0'] },
+  no_reading: { stroke: ['M21.5 12a9.5 9.5 0 1 1-19 0a9.5 9.5 0 1 1 19 0z', 'M7.5 12h9'] },
+};
+
 export function drawVerdictMark(doc: Doc, verdict: Verdict, x: number, y: number, size = 11) {
-  const r = size / 2;
-  const cx = x + r;
-  const cy = y + r;
   const colour = VERDICT_COLOUR[verdict];
-  doc.save().lineWidth(1.4).strokeColor(colour).fillColor(colour);
-  switch (verdict) {
-    case 'in_spec':
-      doc.circle(cx, cy, r).fill();
-      doc.moveTo(cx - r * 0.5, cy).lineTo(cx - r * 0.1, cy + r * 0.42).lineTo(cx + r * 0.55, cy - r * 0.4).strokeColor('#FFFFFF').stroke();
-      break;
-    case 'low':
-      doc.polygon([x, y + size * 0.15], [x + size, y + size * 0.15], [cx, y + size * 0.95]).fill();
-      break;
-    case 'high':
-      doc.polygon([x, y + size * 0.85], [x + size, y + size * 0.85], [cx, y + size * 0.05]).fill();
-      break;
-    case 'marginal':
-      doc.polygon([cx, y], [x + size, cy], [cx, y + size], [x, cy]).fill();
-      break;
-    case 'open':
-      doc.circle(cx, cy, r - 0.7).stroke();
-      doc.moveTo(cx, cy - r - 1).lineTo(cx, cy - r * 0.2).lineWidth(2.4).strokeColor('#FFFFFF').stroke();
-      doc.moveTo(cx - r * 0.45, cy + r * 0.1).lineTo(cx + r * 0.45, cy + r * 0.1).lineWidth(1.4).strokeColor(colour).stroke();
-      break;
-    case 'no_reading':
-      doc.moveTo(x + 1, cy).lineTo(x + size - 1, cy).lineWidth(2).stroke();
-      break;
-  }
+  const shape = VERDICT_PATHS[verdict];
+  doc.save().translate(x, y).scale(size / 24);
+  if (shape.fill) doc.path(shape.fill).fill(colour);
+  // Lines drawn over a filled shape are cut out of it in white.
+  const ink = shape.fill ? '#FFFFFF' : colour;
+  for (const d of shape.stroke) doc.path(d).lineWidth(2.4).lineCap('round').lineJoin('round').stroke(ink);
   doc.restore();
 }
 
