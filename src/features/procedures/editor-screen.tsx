@@ -203,9 +203,9 @@ const styles = StyleSheet.create({
   message: { padding: space.md },
   grow: { flex: 1, minWidth: 240 },
   columns: { flex: 1, flexDirection: 'row' },
-  left: { width: 320, flexGrow: 0, borderRightWidth: 1 },
+  left: { width: 280, flexGrow: 0, borderRightWidth: 1 },
   middle: { flex: 1, padding: space.md },
-  right: { width: 440, flexGrow: 0, borderLeftWidth: 1 },
+  right: { width: 400, flexGrow: 0, borderLeftWidth: 1 },
   pad: { padding: space.md, gap: space.lg },
   addRow: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
 });
