@@ -28,6 +28,6 @@ export function useDraft(id: string | undefined) {
   return useSWR<{ draft: DraftDetail }, ApiError>(id ? `${KEY}/${id}/draft` : null, { revalidateOnFocus: false, revalidateOnReconnect: false, shouldRetryOnError: false });
 }
 
-export function useVersion(id: string, number: number | null) {
+export function useProcedureVersion(id: string, number: number | null) {
   return useSWR<{ version: VersionDetail }, ApiError>(number ? `${KEY}/${id}/versions/${number}` : null);
 }
