@@ -130,7 +130,7 @@ export function layoutProcedure(document: ProcedureDocument): ProcedureLayout {
       from: e.v,
       to: e.w,
       label,
-      points: (data.points ?? []).map((p) => ({ x: p.x, y: p.y })),
+      points: (data.points ?? []).map((p: Point) => ({ x: p.x, y: p.y })),
       labelAt: label && data.x !== undefined && data.y !== undefined ? { x: data.x, y: data.y } : null,
     };
   });

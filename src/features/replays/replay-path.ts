@@ -1,4 +1,5 @@
 import type { StepView } from '@shared/api/diagnosis-types';
+import type { PriorReading } from '@shared/engine/evaluate';
 
 /** Pure helpers for stepping through a concluded diagnosis. */
 
@@ -49,4 +50,13 @@ export function replayPath(steps: readonly Pick<StepView, 'checkId' | 'nextCheck
     }
   }
   return path;
+}
+
+/** The latest reading of each check before step `index`, steps taken back left out, as the engine saw them. */
+export function earlierReadings(steps: readonly Pick<StepView, 'checkId' | 'valueSi' | 'overRange' | 'evaluation' | 'retracted'>[], index: number): Record<string, PriorReading> {
+  const readings: Record<string, PriorReading> = {};
+  for (const s of steps.slice(0, index)) {
+    if (!s.retracted) readings[s.checkId] = { value: s.valueSi, overRange: s.overRange, uncertainty: s.evaluation?.uncertainty };
+  }
+  return readings;
 }

@@ -1,0 +1,158 @@
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { DiagnosisDetail, DiagnosisSummary } from '@shared/api/diagnosis-types';
+import { practiceQuestions } from '@shared/practice/questions';
+import { apiAs, DEMO_PASSWORD, demo, launchBrowser, openPage, type RunningServer, shot, signIn, startServer } from './support';
+
+let server: RunningServer;
+let browser: Browser;
+let diagnoses: DiagnosisSummary[];
+const detail = async (machine: string) => {
+  const api = await apiAs(server.url, demo('lead').email, DEMO_PASSWORD);
+  const id = diagnoses.find((d) => d.machine.includes(machine))!.id;
+  return (await api<{ diagnosis: DiagnosisDetail }>(`/api/diagnoses/${id}`)).diagnosis;
+};
+
+beforeAll(async () => {
+  [server, browser] = await Promise.all([startServer(), launchBrowser()]);
+  const api = await apiAs(server.url, demo('apprentice').email, DEMO_PASSWORD);
+  diagnoses = (await api<{ diagnoses: DiagnosisSummary[] }>('/api/diagnoses')).diagnoses;
+});
+
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+const text = async (page: Page, testID: string) => (await page.getByTestId(testID).first().textContent()) ?? '';
+
+describe('an apprentice on a phone', () => {
+  it('filters the replays, then practises a whole replay and is scored by the server', async () => {
+    const { context, page } = await openPage(browser, server.url, 'phone');
+    await signIn(page, demo('apprentice').email, DEMO_PASSWORD, 'replays');
+    await page.getByTestId('replays-cards').waitFor();
+    expect(await text(page, 'replays-count')).toBe('3 concluded diagnoses');
+    await shot(page, 'phone', 'replays-list-apprentice');
+
+    await page.getByTestId('filter-machine').click();
+    await shot(page, 'phone', 'replays-filter-open', page.getByTestId('replay-filters'));
+    await page.getByTestId('filter-machine-Veltro Tessa 650').click();
+    expect(await text(page, 'replays-count')).toBe('1 of 3 match the filters');
+    await page.getByTestId('filter-dates').click();
+    await page.getByTestId('filter-from').fill('2020-02-30');
+    expect(await page.getByTestId('filter-dates-apply').getAttribute('aria-disabled')).toBe('true');
+    await page.getByTestId('filter-from').fill('2020-01-01');
+    await page.getByTestId('filter-to').fill('2020-12-31');
+    await page.getByTestId('filter-dates-apply').click();
+    await page.getByTestId('replays-no-match').waitFor();
+    await shot(page, 'phone', 'replays-no-match');
+    await page.getByTestId('replays-clear').click();
+    expect(await text(page, 'replays-count')).toBe('3 concluded diagnoses');
+
+    const tessa = await detail('Tessa');
+    await page.getByTestId(`replay-practise-${tessa.id}`).click();
+    await page.getByTestId('replay-step-1').waitFor();
+    await shot(page, 'phone', 'practice-first-question');
+
+    // Answer every question: right, except the verdict on the first marginal reading.
+    let expectedRight = 0;
+    let asked = 0;
+    for (const [i, step] of tessa.steps.entries()) {
+      await page.getByTestId(`replay-step-${step.seq}`).waitFor();
+      const question = practiceQuestions(tessa.document, step)[0];
+      if (question) {
+        asked += 1;
+        expect(await page.getByTestId('replay-verdict').count()).toBe(0);
+        expect(await page.getByTestId('replay-next').getAttribute('aria-disabled')).toBe('true');
+        const wrong = question.asked === 'verdict' && step.verdict === 'marginal' && expectedRight === asked - 1;
+        const choice = wrong ? question.choices.find((c) => c.value !== question.expected)!.value : question.expected;
+        if (!wrong) expectedRight += 1;
+        await page.getByTestId(`practice-choice-${choice}`).click();
+        await page.getByTestId('practice-result').waitFor();
+        expect(await text(page, 'practice-result-word')).toBe(wrong ? 'Not this time' : 'Right');
+        if (wrong) await shot(page, 'phone', 'practice-wrong-answer', page.getByTestId('practice-result'));
+        if (question.asked === 'verdict') {
+          await page.getByTestId('replay-verdict').waitFor();
+          if (i === 4) await shot(page, 'phone', 'practice-verdict-revealed', page.getByTestId('replay-spec-bar'));
+        }
+      }
+      if (i === 2) {
+        await page.getByTestId('replay-diagram-toggle').click();
+        await page.getByTestId('procedure-diagram').waitFor();
+        await shot(page, 'phone', 'practice-diagram', page.getByTestId('procedure-diagram'));
+        await page.getByTestId('replay-diagram-toggle').click();
+      }
+      await page.getByTestId('replay-next').click();
+    }
+
+    await page.getByTestId('practice-summary').waitFor();
+    expect(await text(page, 'practice-score')).toBe(`${expectedRight} of ${asked} right`);
+    expect(expectedRight).toBe(asked - 1);
+    await shot(page, 'phone', 'practice-summary', page.getByTestId('practice-summary'));
+
+    await page.getByTestId('practice-history').click();
+    await page.getByTestId('practice-history-screen').waitFor();
+    await page.getByTestId('practice-run-cards').waitFor();
+    expect(await text(page, 'practice-total')).toBe(`1 pass · ${expectedRight} of ${asked} answers right (${Math.round((100 * expectedRight) / asked)} %)`);
+    await shot(page, 'phone', 'practice-history-apprentice');
+    await context.close();
+  });
+
+  it('shows the replays list in the dark theme', async () => {
+    const { context, page } = await openPage(browser, server.url, 'phone', 'dark');
+    await signIn(page, demo('apprentice').email, DEMO_PASSWORD, 'replays');
+    const fellrunner = await detail('Fellrunner');
+    await page.getByTestId(`replay-watch-${fellrunner.id}`).click();
+    await page.getByTestId('replay-step-1').waitFor();
+    await shot(page, 'phone', 'replay-dark');
+    await context.close();
+  });
+});
+
+describe('a lead at a desk', () => {
+  it('watches a replay with its detour beside the diagram and comments on a step', async () => {
+    const { context, page } = await openPage(browser, server.url, 'desk');
+    await signIn(page, demo('lead').email, DEMO_PASSWORD, 'bench');
+    await page.getByTestId('nav-replays').click();
+    await page.getByTestId('replays-table').waitFor();
+    await shot(page, 'desk', 'replays-table-lead');
+
+    const fellrunner = await detail('Fellrunner');
+    await page.getByTestId(`replay-watch-${fellrunner.id}`).click();
+    await page.getByTestId('replay-step-1').waitFor();
+    await page.getByTestId('procedure-diagram').waitFor();
+    await shot(page, 'desk', 'replay-first-step');
+
+    const detour = fellrunner.steps.find((s) => s.retracted)!;
+    for (let i = 1; i < detour.seq; i++) await page.getByTestId('replay-next').click();
+    await page.getByTestId(`replay-step-${detour.seq}`).waitFor();
+    await page.getByTestId('replay-retracted').waitFor();
+    expect(await text(page, 'replay-step-position')).toBe(`STEP ${detour.seq} OF ${fellrunner.steps.length} · MEASURE`);
+    await shot(page, 'desk', 'replay-detour');
+
+    const comment = 'Read the display twice before typing: 4.1 and 0.41 Ω send you down different branches.';
+    await page.getByTestId('comment-input').fill(comment);
+    await page.getByTestId('comment-submit').click();
+    await page.getByText(comment).waitFor();
+    await shot(page, 'desk', 'replay-comment-added', page.getByTestId('step-comments'));
+
+    await page.getByTestId('replay-next').click();
+    await page.getByTestId(`replay-step-${detour.seq + 1}`).waitFor();
+    expect(await page.getByTestId('replay-retracted').count()).toBe(0);
+    for (let i = detour.seq + 1; i <= fellrunner.steps.length; i++) await page.getByTestId('replay-next').click();
+    await page.getByTestId('replay-finding').waitFor();
+    expect(await text(page, 'replay-finding')).toContain('Stator');
+    await shot(page, 'desk', 'replay-finding');
+
+    // The apprentice sees the comment on that step.
+    const apprentice = await apiAs(server.url, demo('apprentice').email, DEMO_PASSWORD);
+    const { comments } = await apprentice<{ comments: { stepSeq: number; body: string }[] }>(`/api/diagnoses/${fellrunner.id}/comments`);
+    expect(comments).toEqual([expect.objectContaining({ stepSeq: detour.seq, body: comment })]);
+
+    await page.goto('/replays/practice');
+    await page.getByTestId('practice-members').waitFor();
+    expect(await text(page, 'practice-members')).toContain('Inès Marchetti');
+    await shot(page, 'desk', 'practice-history-team');
+    await context.close();
+  });
+});
