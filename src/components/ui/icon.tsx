@@ -61,6 +61,21 @@ const drawings = {
     </>
   ),
   plus: <Path d="M12 5v14M5 12h14" />,
+  zoomIn: (
+    <>
+      <Circle cx={10.5} cy={10.5} r={6.5} />
+      <Path d="M15.2 15.2L20.5 20.5M7.5 10.5h6M10.5 7.5v6" />
+    </>
+  ),
+  zoomOut: (
+    <>
+      <Circle cx={10.5} cy={10.5} r={6.5} />
+      <Path d="M15.2 15.2L20.5 20.5M7.5 10.5h6" />
+    </>
+  ),
+  fit: <Path d="M4 9V4h5M15 4h5v5M20 15v5h-5M9 20H4v-5" />,
+  download: <Path d="M12 3.5v11M7 10l5 5 5-5M4.5 17v3h15v-3" />,
+  upload: <Path d="M12 15V4M7 9l5-5 5 5M4.5 17v3h15v-3" />,
   forward: <Path d="M9 5l7 7-7 7" />,
   path: (
     <>

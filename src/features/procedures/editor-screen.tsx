@@ -14,13 +14,24 @@ import { Heading, Text } from '@/components/ui/text';
 import { CheckFormPanel } from '@/features/procedures/components/check-form-panel';
 import { CheckList } from '@/features/procedures/components/check-list';
 import { OutcomesEditor } from '@/features/procedures/components/outcomes-editor';
+import { PreviewPanel } from '@/features/procedures/components/preview-panel';
 import { ProblemsPanel } from '@/features/procedures/components/problems-panel';
 import { ProcedureDiagram } from '@/features/procedures/components/procedure-diagram';
+import { VersionCompareLoader, type VersionPick } from '@/features/procedures/components/version-compare';
+import { VersionsPanel } from '@/features/procedures/components/versions-panel';
 import { useDraftEditor } from '@/features/procedures/use-draft-editor';
 import { useUndoKeys } from '@/features/procedures/use-undo-keys';
 import { useDraft, useProcedure } from '@/hooks/use-procedures';
 import { api, ApiError } from '@/lib/api';
 import { radius, space, type, useTheme } from '@/lib/theme';
+
+type SidePanel = 'check' | 'preview' | 'versions';
+const SIDE_PANELS: { key: SidePanel; label: string }[] = [
+  { key: 'check', label: 'Check' },
+  { key: 'preview', label: 'Preview' },
+  { key: 'versions', label: 'Versions' },
+];
+type Comparison = { before: VersionPick; after: VersionPick };
 
 export function EditorScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -38,36 +49,79 @@ export function EditorScreen() {
       {procedure.error ? (
         <ErrorState title="Couldn't open the procedure" error={procedure.error} onRetry={() => void procedure.mutate()} />
       ) : noDraft && procedure.data ? (
-        <EmptyState
-          testID="no-draft"
-          icon="procedures"
-          title="No draft to edit"
-          body={`${title} has no draft. Start one from its latest version; the published versions stay as they are.`}
-          action={
-            procedure.data.procedure.latestVersion
-              ? {
-                  label: `New draft from version ${procedure.data.procedure.latestVersion.number}`,
-                  testID: 'new-draft',
-                  onPress: async () => {
-                    await api(`/api/procedures/${id}/draft`, 'POST', { fromVersion: procedure.data!.procedure.latestVersion!.number });
-                    await draft.mutate();
-                  },
-                }
-              : undefined
-          }
+        <NoDraft
+          procedureId={id}
+          title={title}
+          latest={procedure.data.procedure.latestVersion?.number ?? null}
+          onBack={() => router.navigate('/procedures')}
+          onDraftStarted={() => void draft.mutate()}
         />
       ) : draft.error ? (
         <ErrorState title="Couldn't open the draft" error={draft.error} onRetry={() => void draft.mutate()} />
       ) : !draft.data || !procedure.data ? (
         <LoadingState label="Opening the draft…" />
       ) : (
-        <Editor key={draft.data.draft.revision} procedureId={id} title={title} loaded={draft.data.draft} onCopied={(copyId) => router.replace(`/procedures/${copyId}`)} onBack={() => router.navigate('/procedures')} />
+        <Editor key={draft.data.draft.revision} procedureId={id} title={title} loaded={draft.data.draft} onCopied={(copyId) => router.replace(`/procedures/${copyId}`)} onBack={() => router.navigate('/procedures')} onDraftStarted={() => void draft.mutate()} />
       )}
     </View>
   );
 }
 
-function Editor({ procedureId, title, loaded, onCopied, onBack }: { procedureId: string; title: string; loaded: DraftDetail; onCopied: (id: string) => void; onBack: () => void }) {
+/** A procedure without a draft: its versions, from any of which a new draft can start. */
+function NoDraft({ procedureId, title, latest, onBack, onDraftStarted }: { procedureId: string; title: string; latest: number | null; onBack: () => void; onDraftStarted: () => void }) {
+  const colors = useTheme();
+  const [comparing, setComparing] = useState<Comparison | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <View style={styles.editor} testID="no-draft-screen">
+      <View style={[styles.header, { borderBottomColor: colors.border, backgroundColor: colors.surface }]}>
+        <Button testID="editor-back" label="Procedures" icon="back" variant="quiet" onPress={onBack} />
+        <View style={styles.titles}>
+          <Heading>{title}</Heading>
+          <Text variant="small" tone="textMuted">
+            No draft
+          </Text>
+        </View>
+      </View>
+      {comparing ? (
+        <VersionCompareLoader procedureId={procedureId} before={comparing.before} after={comparing.after} draft={null} onClose={() => setComparing(null)} />
+      ) : (
+        <View style={styles.columns}>
+          <ScrollView style={styles.middle} contentContainerStyle={styles.pad}>
+            <FormError message={error} />
+            <EmptyState
+              testID="no-draft"
+              icon="procedures"
+              title="No draft to edit"
+              body={`${title} has no draft. Start one from a version; the published versions stay as they are.`}
+              action={
+                latest
+                  ? {
+                      label: `New draft from version ${latest}`,
+                      testID: 'new-draft',
+                      onPress: async () => {
+                        try {
+                          await api(`/api/procedures/${procedureId}/draft`, 'POST', { fromVersion: latest });
+                          onDraftStarted();
+                        } catch (e) {
+                          setError(e instanceof Error ? e.message : 'The draft could not be started. Try again.');
+                        }
+                      },
+                    }
+                  : undefined
+              }
+            />
+          </ScrollView>
+          <ScrollView style={[styles.right, { borderLeftColor: colors.border }]} contentContainerStyle={styles.pad}>
+            <VersionsPanel procedureId={procedureId} onDraftStarted={onDraftStarted} onCompare={(before, after) => setComparing({ before, after })} />
+          </ScrollView>
+        </View>
+      )}
+    </View>
+  );
+}
+
+function Editor({ procedureId, title, loaded, onCopied, onBack, onDraftStarted }: { procedureId: string; title: string; loaded: DraftDetail; onCopied: (id: string) => void; onBack: () => void; onDraftStarted: () => void }) {
   const colors = useTheme();
   const editor = useDraftEditor(procedureId, loaded);
   const { document, problems } = editor;
@@ -75,6 +129,8 @@ function Editor({ procedureId, title, loaded, onCopied, onBack }: { procedureId:
   const [note, setNote] = useState('');
   const [publishing, setPublishing] = useState(false);
   const [message, setMessage] = useState<{ tone: 'error' | 'done'; text: string } | null>(null);
+  const [panel, setPanel] = useState<SidePanel>('check');
+  const [comparing, setComparing] = useState<Comparison | null>(null);
   useUndoKeys(editor.undo, editor.redo);
   const flagged = useMemo(() => new Set(problems.map((p) => p.checkId)), [problems]);
   const selected = document.checks.find((c) => c.id === selectedId) ?? null;
@@ -148,6 +204,9 @@ function Editor({ procedureId, title, loaded, onCopied, onBack }: { procedureId:
         </View>
       ) : null}
       {message ? <View style={styles.message}>{message.tone === 'error' ? <FormError message={message.text} /> : <Text tone="success">{message.text}</Text>}</View> : null}
+      {comparing ? (
+        <VersionCompareLoader procedureId={procedureId} before={comparing.before} after={comparing.after} draft={document} onClose={() => setComparing(null)} />
+      ) : (
       <View style={styles.columns}>
         <ScrollView style={[styles.left, { borderRightColor: colors.border }]} contentContainerStyle={styles.pad}>
           <View style={styles.addRow}>
@@ -166,7 +225,16 @@ function Editor({ procedureId, title, loaded, onCopied, onBack }: { procedureId:
           <ProcedureDiagram document={document} selectedId={selectedId} flagged={flagged} onSelect={setSelectedId} />
         </View>
         <ScrollView style={[styles.right, { borderLeftColor: colors.border }]} contentContainerStyle={styles.pad}>
-          {selected ? (
+          <View style={styles.tabs} role="group" aria-label="Side panel">
+            {SIDE_PANELS.map((p) => (
+              <Button key={p.key} testID={`panel-${p.key}`} label={p.label} selected={panel === p.key} onPress={() => setPanel(p.key)} style={styles.tab} />
+            ))}
+          </View>
+          {panel === 'preview' ? (
+            <PreviewPanel document={document} onShowCheck={setSelectedId} />
+          ) : panel === 'versions' ? (
+            <VersionsPanel procedureId={procedureId} onDraftStarted={onDraftStarted} onCompare={(before, after) => setComparing({ before, after })} />
+          ) : selected ? (
             <>
               <CheckFormPanel key={`${selected.id}:${editor.epoch}`} check={selected} document={document} onChange={(next, group) => editor.edit(replaceCheck(document, selected.id, next), group)} />
               <OutcomesEditor check={selected} document={document} onEdit={(next) => editor.edit(next)} onSelect={setSelectedId} />
@@ -189,6 +257,7 @@ function Editor({ procedureId, title, loaded, onCopied, onBack }: { procedureId:
           )}
         </ScrollView>
       </View>
+      )}
     </View>
   );
 }
@@ -208,4 +277,6 @@ const styles = StyleSheet.create({
   right: { width: 400, flexGrow: 0, borderLeftWidth: 1 },
   pad: { padding: space.md, gap: space.lg },
   addRow: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
+  tabs: { flexDirection: 'row', gap: space.xs },
+  tab: { flex: 1, paddingHorizontal: space.sm },
 });

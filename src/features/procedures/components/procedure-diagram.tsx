@@ -8,8 +8,23 @@ import { Text } from '@/components/ui/text';
 import { layoutProcedure, type DiagramNode } from '@/lib/procedure-layout';
 import { fonts, radius, space, useTheme, type Palette } from '@/lib/theme';
 
+/** How a check differs from the version it is compared with; drawn as a word and an outline, not by colour alone. */
+export type DiagramMark = 'added' | 'changed' | 'removed';
+const MARK_WORDS: Record<DiagramMark, string> = { added: 'NEW', changed: 'CHANGED', removed: 'REMOVED' };
+
+interface DiagramProps {
+  document: ProcedureDocument;
+  selectedId: string | null;
+  flagged: ReadonlySet<string>;
+  onSelect?: (id: string) => void;
+  marks?: ReadonlyMap<string, DiagramMark>;
+  /** Names the diagram to screen readers when two are side by side. */
+  label?: string;
+  testID?: string;
+}
+
 /** The procedure as a picture: one shape per check kind, outcomes as labelled arrows; press a check to select it. */
-export function ProcedureDiagram({ document, selectedId, flagged, onSelect }: { document: ProcedureDocument; selectedId: string | null; flagged: ReadonlySet<string>; onSelect: (id: string) => void }) {
+export function ProcedureDiagram({ document, selectedId, flagged, onSelect, marks, label = 'Diagram', testID = 'procedure-diagram' }: DiagramProps) {
   const colors = useTheme();
   const layout = useMemo(() => layoutProcedure(document), [document]);
   const [pane, setPane] = useState({ width: 0, height: 0 });
@@ -24,12 +39,12 @@ export function ProcedureDiagram({ document, selectedId, flagged, onSelect }: { 
         <Text variant="label" tone="textMuted">
           {`${Math.round(shown.scale * 100)} %`}
         </Text>
-        <Button testID="zoom-out" label="Zoom out" hideLabel icon="back" onPress={() => setView(zoomBy(shown, -1, pane))} />
-        <Button testID="zoom-in" label="Zoom in" hideLabel icon="plus" onPress={() => setView(zoomBy(shown, 1, pane))} />
-        <Button testID="zoom-fit" label="Fit" onPress={() => setView(null)} />
-        {selected ? <Button testID="zoom-selected" label="Show selected" onPress={() => setView(centreOn({ ...shown, scale: Math.max(shown.scale, 0.8) }, selected, pane))} /> : null}
+        <Button testID={`${testID}-zoom-out`} label="Zoom out" hideLabel icon="zoomOut" onPress={() => setView(zoomBy(shown, -1, pane))} />
+        <Button testID={`${testID}-zoom-in`} label="Zoom in" hideLabel icon="zoomIn" onPress={() => setView(zoomBy(shown, 1, pane))} />
+        <Button testID={`${testID}-zoom-fit`} label="Fit" icon="fit" onPress={() => setView(null)} />
+        {selected ? <Button testID={`${testID}-zoom-selected`} label="Show selected" onPress={() => setView(centreOn({ ...shown, scale: Math.max(shown.scale, 0.8) }, selected, pane))} /> : null}
       </View>
-      <View style={styles.canvas} onLayout={onLayout} testID="procedure-diagram" role="img" aria-label={`Diagram of ${document.checks.length} checks; use the check list to select one.`}>
+      <View style={styles.canvas} onLayout={onLayout} testID={testID} role="img" aria-label={`${label} of ${document.checks.length} checks${onSelect ? '; use the check list to select one' : ''}.`}>
         {pane.width > 0 ? (
           <Svg width={pane.width} height={pane.height}>
             <G transform={`translate(${shown.x} ${shown.y}) scale(${shown.scale})`}>
@@ -47,19 +62,24 @@ export function ProcedureDiagram({ document, selectedId, flagged, onSelect }: { 
                   ) : null}
                 </G>
               ))}
-              {layout.nodes.map((n) => (
-                <G key={n.id} onPress={() => onSelect(n.id)}>
+              {layout.nodes.map((n) => {
+                const mark = marks?.get(n.id);
+                return (
+                <G key={n.id} onPress={onSelect ? () => onSelect(n.id) : undefined}>
+                  {mark ? <MarkOutline node={n} mark={mark} colors={colors} /> : null}
                   <NodeShape node={n} colors={colors} selected={n.id === selectedId} flagged={flagged.has(n.id)} />
                   <SvgText x={n.x} y={n.y - n.height / 2 + 15} fontSize={11} fontFamily={fonts.semiBold} fill={colors.textMuted} textAnchor="middle">
                     {`${KIND_WORD[n.kind]}${n.id === document.startCheckId ? ' · start' : ''}${flagged.has(n.id) ? ' · fix' : ''}`}
                   </SvgText>
+                  {mark ? <MarkTag node={n} mark={mark} colors={colors} /> : null}
                   {n.lines.map((line, i) => (
                     <SvgText key={i} x={n.x} y={n.y - n.height / 2 + 34 + i * 17} fontSize={14} fontFamily={fonts.semiBold} fill={colors.text} textAnchor="middle">
                       {line}
                     </SvgText>
                   ))}
                 </G>
-              ))}
+                );
+              })}
             </G>
           </Svg>
         ) : null}
@@ -103,6 +123,43 @@ function NodeShape({ node: n, colors, selected, flagged }: { node: DiagramNode; 
     case 'measure':
       return <Rect x={left} y={top} width={n.width} height={n.height} rx={16} fill={fill} stroke={stroke} strokeWidth={strokeWidth} strokeDasharray={dash} />;
   }
+}
+
+function markInk(mark: DiagramMark, colors: Palette): string {
+  return mark === 'added' ? colors.success : mark === 'removed' ? colors.danger : colors.warning;
+}
+
+/** A wide halo around a compared check: solid for new or changed, dashed for removed. */
+function MarkOutline({ node: n, mark, colors }: { node: DiagramNode; mark: DiagramMark; colors: Palette }) {
+  const gap = 6;
+  return (
+    <Rect
+      x={n.x - n.width / 2 - gap}
+      y={n.y - n.height / 2 - gap}
+      width={n.width + gap * 2}
+      height={n.height + gap * 2}
+      rx={10}
+      fill="none"
+      stroke={markInk(mark, colors)}
+      strokeWidth={4}
+      strokeDasharray={mark === 'removed' ? '8 5' : undefined}
+    />
+  );
+}
+
+/** The mark in words on a tag straddling the node's top edge. */
+function MarkTag({ node: n, mark, colors }: { node: DiagramNode; mark: DiagramMark; colors: Palette }) {
+  const word = MARK_WORDS[mark];
+  const width = word.length * 8 + 16;
+  const top = n.y - n.height / 2 - 6;
+  return (
+    <G>
+      <Rect x={n.x + n.width / 2 - width} y={top - 11} width={width} height={22} rx={11} fill={markInk(mark, colors)} />
+      <SvgText x={n.x + n.width / 2 - width / 2} y={top + 4} fontSize={12} fontFamily={fonts.bold} fill={colors.surface} textAnchor="middle">
+        {word}
+      </SvgText>
+    </G>
+  );
 }
 
 const labelWidth = (label: string) => label.length * 7 + 10;
