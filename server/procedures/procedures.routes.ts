@@ -1,5 +1,5 @@
 import { In, IsNull, Not } from 'typeorm';
-import { readProcedureFile, procedureFile } from '@shared/procedures/exchange-format';
+import { procedureFile, procedureFileName, readProcedureFile } from '@shared/procedures/exchange-format';
 import type { ProcedureDocument } from '@shared/engine/procedure';
 import type { DraftDetail, ProcedureDetail, ProcedureSummary, VersionDetail, VersionSummary } from '@shared/api/procedure-types';
 import { copyDraftSchema, createProcedureSchema, newDraftSchema, publishDraftSchema, saveDraftSchema } from '@shared/procedures/schemas';
@@ -175,9 +175,9 @@ export const procedureRoutes: RouteDef[] = [
         ? await repo.findOneBy({ procedureId: p.id, number: versionNumber(req.query.version) })
         : ((await repo.findOne({ where: { procedureId: p.id, status: 'published' }, order: { number: 'DESC' } })) ?? (await repo.findOneBy({ procedureId: p.id, status: 'draft' })));
       if (!v) throw notFound('version');
-      const name = p.title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'procedure';
-      res.setHeader('Content-Disposition', `attachment; filename="${name}-${v.number === null ? 'draft' : `v${v.number}`}.probepath.json"`);
-      res.json(procedureFile(p, v.number === null ? 'draft' : String(v.number), v.document));
+      const exportedFrom = v.number === null ? 'draft' : String(v.number);
+      res.setHeader('Content-Disposition', `attachment; filename="${procedureFileName(p.title, exportedFrom)}"`);
+      res.json(procedureFile(p, exportedFrom, v.document));
     },
   },
   {

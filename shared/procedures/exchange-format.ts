@@ -73,3 +73,9 @@ export function procedureFile(meta: { title: string; complaint: string; family: 
     document,
   };
 }
+
+/** "Coil and pickup check", version 2 → "coil-and-pickup-check-v2.probepath.json"; the draft ends "-draft". */
+export function procedureFileName(title: string, exportedFrom: string): string {
+  const name = title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'procedure';
+  return `${name}-${exportedFrom === 'draft' ? 'draft' : `v${exportedFrom}`}.probepath.json`;
+}

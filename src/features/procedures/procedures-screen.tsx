@@ -13,6 +13,7 @@ import { Screen } from '@/components/ui/screen';
 import { type Column, Table } from '@/components/ui/table';
 import { Text } from '@/components/ui/text';
 import { CreateProcedureForm } from '@/features/procedures/components/create-procedure-form';
+import { ExportButton } from '@/features/procedures/components/export-button';
 import { ImportButton } from '@/features/procedures/components/import-button';
 import { PlainField } from '@/features/procedures/components/search-field';
 import { useImportProcedure, useProcedures } from '@/hooks/use-procedures';
@@ -69,7 +70,16 @@ export function ProceduresScreen() {
     { title: 'Version', flex: 1.3, render: (p) => <VersionBadges procedure={p} /> },
     { title: 'Last edited', flex: 1.4, render: (p) => <Edited procedure={p} /> },
     { title: 'Runs', flex: 0.6, render: (p) => <Text style={styles.number}>{p.timesRun}</Text> },
-    { title: 'Open', flex: 0.8, render: (p) => <Button testID={`open-${p.id}`} label="Open" ariaLabel={`Open ${p.title}`} onPress={() => open(p.id)} /> },
+    {
+      title: 'Actions',
+      flex: 1.5,
+      render: (p) => (
+        <View style={styles.rowActions}>
+          <Button testID={`open-${p.id}`} label="Open" ariaLabel={`Open ${p.title}`} onPress={() => open(p.id)} />
+          <ExportButton procedureId={p.id} label="Export" ariaLabel={`Export ${p.title} as a file`} testID={`export-${p.id}`} />
+        </View>
+      ),
+    },
   ];
 
   return (
@@ -186,4 +196,5 @@ const styles = StyleSheet.create({
   cell: { gap: 2 },
   badges: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
   number: { fontVariant: ['tabular-nums'] },
+  rowActions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
 });

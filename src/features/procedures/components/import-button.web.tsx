@@ -24,7 +24,7 @@ export function ImportButton({ onFile, loading }: { onFile: (content: unknown | 
           }
         }}
       />
-      <Button testID="import-procedure" label="Import" loading={loading} onPress={() => input.current?.click()} />
+      <Button testID="import-procedure" label="Import" icon="upload" loading={loading} onPress={() => input.current?.click()} />
     </>
   );
 }

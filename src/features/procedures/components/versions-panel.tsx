@@ -8,6 +8,7 @@ import { FormError } from '@/components/ui/form-error';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Heading, Text } from '@/components/ui/text';
 import { ChipRow } from '@/features/procedures/components/chip-row';
+import { ExportButton } from '@/features/procedures/components/export-button';
 import { versionName, type VersionPick } from '@/features/procedures/components/version-compare';
 import { useProcedure } from '@/hooks/use-procedures';
 import { api } from '@/lib/api';
@@ -79,6 +80,7 @@ export function VersionsPanel({ procedureId, onDraftStarted, onCompare }: Props)
       {versions.map((v) => (
         <VersionRow
           key={v.number ?? 'draft'}
+          procedureId={procedureId}
           version={v}
           hasDraft={hasDraft}
           busy={busy}
@@ -108,6 +110,7 @@ export function VersionsPanel({ procedureId, onDraftStarted, onCompare }: Props)
 }
 
 interface RowProps {
+  procedureId: string;
   version: VersionSummary;
   hasDraft: boolean;
   busy: string | null;
@@ -117,7 +120,7 @@ interface RowProps {
   onRetire: (number: number) => void;
 }
 
-function VersionRow({ version: v, hasDraft, busy, confirming, onStartDraft, onAskRetire, onRetire }: RowProps) {
+function VersionRow({ procedureId, version: v, hasDraft, busy, confirming, onStartDraft, onAskRetire, onRetire }: RowProps) {
   const colors = useTheme();
   const badge = STATUS_BADGE[v.status];
   const name = v.number === null ? 'Draft' : `Version ${v.number}`;
@@ -143,6 +146,7 @@ function VersionRow({ version: v, hasDraft, busy, confirming, onStartDraft, onAs
           {hasDraft ? null : (
             <Button testID={`version-${v.number}-new-draft`} label="New draft from this" loading={busy === `draft-${v.number}`} onPress={() => onStartDraft(v.number!)} />
           )}
+          <ExportButton procedureId={procedureId} version={v.number} label="Export" ariaLabel={`Export version ${v.number} as a file`} testID={`version-${v.number}-export`} />
           {v.status === 'published' && !confirming ? <Button testID={`version-${v.number}-retire`} label="Retire" onPress={() => onAskRetire(v.number)} /> : null}
         </View>
       ) : null}
