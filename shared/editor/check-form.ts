@@ -19,7 +19,7 @@ export interface CheckFormValues {
   /** Comma-separated. */
   pins: string;
   wireColours: string;
-  /** One per line. */
+  /** Separated by “|”. */
   cautions: string;
   quantity: Quantity;
   meterFunction: MeterFunction | '';
@@ -139,7 +139,7 @@ export const checkFormSchema = yup.object({
   }).max(1000),
 });
 
-const lines = (text: string) => text.split('\n').map((l) => l.trim()).filter(Boolean);
+const lines = (text: string) => text.split(/[\n|]/).map((l) => l.trim()).filter(Boolean);
 const list = (text: string) => text.split(',').map((l) => l.trim()).filter(Boolean);
 
 /** A value written so that reading it back gives the same number: "480 Ω", "12.65 V", "0.4 Ω" → "400 mΩ". */
@@ -167,7 +167,7 @@ export function formValuesOf(check: Check): CheckFormValues {
     connector: check.probe?.connector ?? '',
     pins: (check.probe?.pins ?? []).join(', '),
     wireColours: (check.probe?.wireColours ?? []).join(', '),
-    cautions: (check.cautions ?? []).join('\n'),
+    cautions: (check.cautions ?? []).join(' | '),
     quantity,
     meterFunction: measure?.meterFunction ?? '',
     range: measure?.range === undefined ? '' : formatExact(measure.range, quantity),
