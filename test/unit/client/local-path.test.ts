@@ -67,6 +67,7 @@ describe('where a diagnosis stands on the device', () => {
     expect(local.steps[2].valueSi).toBe(450);
     expect(local.currentCheckId).toBe('ckp-ecu');
     expect(local.pendingCount).toBe(3);
+    expect(local.waitingCount).toBe(3);
   });
 
   it('reaches the same verdicts and next checks as the server will', () => {
@@ -120,6 +121,7 @@ describe('where a diagnosis stands on the device', () => {
       ['450', 'not_recorded'],
     ]);
     expect(local.notRecorded[1].problem).toContain('Held back');
+    expect([local.pendingCount, local.waitingCount]).toEqual([2, 0]);
   });
 
   it('does not apply a waiting step typed for a check the diagnosis is no longer at', () => {

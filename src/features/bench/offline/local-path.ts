@@ -43,8 +43,10 @@ export interface LocalDiagnosis {
   /** What was typed but not recorded, in order. */
   notRecorded: PathStep[];
   currentCheckId: string;
-  /** Entries not yet answered by the server. */
+  /** Entries not yet answered by the server, refused ones included. */
   pendingCount: number;
+  /** Of those, the ones played onto the path and waiting to be sent. */
+  waitingCount: number;
 }
 
 type DiagnosisState = Pick<DiagnosisDetail, 'document' | 'steps' | 'currentCheckId' | 'ambientC'> & { meter: Pick<DiagnosisDetail['meter'], 'ranges'> };
@@ -54,6 +56,7 @@ export function localDiagnosis(detail: DiagnosisState, outbox: readonly OutboxEn
   const notRecorded: PathStep[] = [];
   let current = detail.currentCheckId;
   let pendingCount = 0;
+  let waitingCount = 0;
   let blocked: string | null = null;
 
   for (const entry of entriesOf(outbox, diagnosisId)) {
@@ -85,6 +88,7 @@ export function localDiagnosis(detail: DiagnosisState, outbox: readonly OutboxEn
       last.retracted = true;
       last.retractionPending = true;
       current = last.checkId;
+      waitingCount++;
       continue;
     }
 
@@ -115,8 +119,9 @@ export function localDiagnosis(detail: DiagnosisState, outbox: readonly OutboxEn
       problem: null,
     });
     current = decision.nextCheckId;
+    waitingCount++;
   }
-  return { steps, notRecorded, currentCheckId: current, pendingCount };
+  return { steps, notRecorded, currentCheckId: current, pendingCount, waitingCount };
 }
 
 /** The live path as `decideStep` takes it: retracted steps left out, uncertainties from their evaluations. */

@@ -1,0 +1,4 @@
+import { StartScreen } from '@/features/bench/start-screen';
+import { sectionRoute } from '@/features/shell/section-route';
+
+export default sectionRoute('bench', StartScreen);

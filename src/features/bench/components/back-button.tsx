@@ -1,0 +1,15 @@
+import { Button } from '@/components/ui/button';
+
+/** Takes back the last step: it stays on the path, struck through, and its check comes back. */
+export function BackButton({ onBack }: { onBack: (() => void) | null }) {
+  return (
+    <Button
+      testID="step-back"
+      icon="back"
+      label="Back"
+      ariaLabel="Back: take back the last step"
+      disabled={!onBack}
+      onPress={onBack ?? undefined}
+    />
+  );
+}

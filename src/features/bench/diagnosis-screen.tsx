@@ -1,0 +1,104 @@
+import { useKeepAwake } from 'expo-keep-awake';
+import { useLocalSearchParams } from 'expo-router';
+import Head from 'expo-router/head';
+import { useState } from 'react';
+import { ScrollView, StyleSheet, View } from 'react-native';
+import { ErrorState } from '@/components/ui/error-state';
+import { LoadingState } from '@/components/ui/loading-state';
+import { Heading } from '@/components/ui/text';
+import { space, useBreakpoints, useTheme } from '@/lib/theme';
+import { CautionList } from './components/caution-list';
+import { CheckStep } from './components/check-step';
+import { ClosedDiagnosis } from './components/closed-diagnosis';
+import { DiagnosisHeader } from './components/diagnosis-header';
+import { PathList } from './components/path-list';
+import { SyncStatus } from './components/sync-status';
+import { useBenchDiagnosis } from './hooks/use-bench-diagnosis';
+
+/**
+ * Running a diagnosis at the bench, one check at a time. Opens where the diagnosis stands (on any device),
+ * keeps the screen awake, and works on without signal from the device's copy and outbox.
+ */
+export function DiagnosisScreen() {
+  useKeepAwake(undefined, { suppressDeactivateWarnings: true });
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const bench = useBenchDiagnosis(id);
+  const colors = useTheme();
+  const { isWide } = useBreakpoints();
+  const [view, setView] = useState<'check' | 'path'>('check');
+
+  const { detail, local } = bench;
+  if (!detail || !local) {
+    return (
+      <View style={[styles.fill, { backgroundColor: colors.background }]} testID="diagnosis-screen">
+        {bench.error ? <ErrorState title="Can't open this diagnosis" error={bench.error} onRetry={bench.retryLoad} /> : <LoadingState label="Opening the diagnosis…" />}
+      </View>
+    );
+  }
+
+  const liveSteps = local.steps.filter((s) => !s.retracted).length;
+  const check = detail.document.checks.find((c) => c.id === local.currentCheckId);
+  const path = (
+    <ScrollView contentContainerStyle={styles.pathContent} testID="path-panel">
+      <Heading level={2}>Path</Heading>
+      <PathList document={detail.document} local={local} onDismissNotRecorded={bench.dismissNotRecorded} />
+      <Heading level={3}>Cautions for this procedure</Heading>
+      <CautionList cautions={detail.document.cautions} testID="path-cautions" />
+    </ScrollView>
+  );
+
+  let body;
+  if (detail.status !== 'open') {
+    body = <ClosedDiagnosis detail={detail} local={local} />;
+  } else if (!check) {
+    body = <ErrorState title="This check is missing" error={new Error(`The procedure version has no check “${local.currentCheckId}”. Reload to see where the diagnosis stands.`)} onRetry={bench.retryLoad} />;
+  } else {
+    const step = (
+      <CheckStep
+        key={`${check.id}:${liveSteps}`}
+        detail={detail}
+        local={local}
+        check={check}
+        number={liveSteps + 1}
+        onRecord={bench.record}
+        onBack={liveSteps > 0 ? bench.back : null}
+        status={
+          <SyncStatus
+            pending={local.waitingCount}
+            offline={bench.offline}
+            notRecorded={local.notRecorded.length}
+            onSendNow={bench.sendNow}
+            onShowPath={isWide ? null : () => setView('path')}
+          />
+        }
+      />
+    );
+    body = isWide ? (
+      <View style={[styles.fill, styles.row]}>
+        <View style={styles.fill}>{step}</View>
+        <View style={[styles.side, { borderLeftColor: colors.border, backgroundColor: colors.background }]}>{path}</View>
+      </View>
+    ) : view === 'path' ? (
+      path
+    ) : (
+      step
+    );
+  }
+
+  return (
+    <View style={[styles.fill, { backgroundColor: colors.background }]} testID="diagnosis-screen">
+      <Head>
+        <title>{`${check?.title ?? 'Diagnosis'} · ${detail.machine} · Probepath`}</title>
+      </Head>
+      <DiagnosisHeader detail={detail} steps={liveSteps} view={view} onToggle={isWide || detail.status !== 'open' ? null : () => setView(view === 'path' ? 'check' : 'path')} />
+      {body}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  fill: { flex: 1 },
+  row: { flexDirection: 'row' },
+  side: { width: 420, borderLeftWidth: 1 },
+  pathContent: { padding: space.lg, gap: space.lg },
+});
