@@ -37,7 +37,31 @@ export interface CheckFormValues {
   marginalPolicy: MarginalPolicy | '';
   part: string;
   action: string;
+  /** An observation's choices; where each leads is edited with the outcomes. */
+  choices: ChoiceValues[];
 }
+
+export interface ChoiceValues {
+  id: string;
+  label: string;
+}
+
+/** The engine's procedure schema allows at most this many choices on one observation. */
+export const MAX_CHOICES = 12;
+
+/** A choice id not yet used on this check: "choice-3", "choice-4"… */
+export function newChoiceId(choices: readonly ChoiceValues[]): string {
+  const taken = new Set(choices.map((c) => c.id));
+  let n = choices.length + 1;
+  while (taken.has(`choice-${n}`)) n++;
+  return `choice-${n}`;
+}
+
+/** What an observation offers when a check becomes one. */
+export const DEFAULT_CHOICES: readonly ChoiceValues[] = [
+  { id: 'seen', label: 'Seen' },
+  { id: 'not-seen', label: 'Not seen' },
+];
 
 /** Which value fields each spec kind asks for. */
 export const SPEC_FIELDS: Record<SpecKind, readonly ('min' | 'max' | 'nominal' | 'tolerance' | 'openAbove' | 'minRatio' | 'refCheck')[]> = {
@@ -137,6 +161,25 @@ export const checkFormSchema = yup.object({
   action: yup.string().test('action', 'Say what to do about it.', function check(v) {
     return (this.parent as CheckFormValues).kind !== 'finding' || Boolean(v?.trim());
   }).max(1000),
+  choices: yup
+    .array(
+      yup.object({
+        id: yup.string().required(),
+        label: yup.string().trim().max(200, 'A choice has at most 200 characters.').required('Say what the technician sees, e.g. “Tester flashes”.'),
+      }),
+    )
+    .required()
+    .when('kind', {
+      is: 'observe',
+      then: (schema) =>
+        schema
+          .min(2, 'Give at least two observations to pick from.')
+          .max(MAX_CHOICES, `At most ${MAX_CHOICES} observations to pick from.`)
+          .test('distinct', 'Two choices say the same; make each one different.', (choices) => {
+            const labels = (choices ?? []).map((c) => (c.label ?? '').trim().toLowerCase()).filter(Boolean);
+            return new Set(labels).size === labels.length;
+          }),
+    }),
 });
 
 const lines = (text: string) => text.split(/[\n|]/).map((l) => l.trim()).filter(Boolean);
@@ -184,6 +227,7 @@ export function formValuesOf(check: Check): CheckFormValues {
     marginalPolicy: measure?.marginalPolicy ?? '',
     part: check.kind === 'finding' ? check.finding.part : '',
     action: check.kind === 'finding' ? check.finding.action : '',
+    choices: check.kind === 'observe' ? check.choices.map((c) => ({ id: c.id, label: c.label })) : [],
   };
 }
 
@@ -223,8 +267,12 @@ export function checkFromForm(values: CheckFormValues, previous: Check): Check {
         ...retest,
       };
     }
-    case 'observe':
-      return { ...base, kind: 'observe', choices: previous.kind === 'observe' ? previous.choices : [{ id: 'seen', label: 'Seen', next: onward }], ...retest };
+    case 'observe': {
+      // A kept choice keeps where it leads; a new one starts where the check's first way out went.
+      const was = new Map(previous.kind === 'observe' ? previous.choices.map((c) => [c.id, c.next]) : []);
+      const choices = values.choices.map((c) => ({ id: c.id, label: c.label.trim(), next: was.get(c.id) ?? onward }));
+      return { ...base, kind: 'observe', choices, ...retest };
+    }
     case 'task':
       return { ...base, kind: 'task', next: previous.kind === 'task' ? previous.next : onward, ...retest };
     case 'finding':

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkFormSchema, checkFromForm, formatExact, formValuesOf } from '@shared/editor/check-form';
+import { checkFormSchema, checkFromForm, formatExact, formValuesOf, newChoiceId } from '@shared/editor/check-form';
 import { fixtureProcedure } from '../../support/fixture-procedure';
 
 describe('check form', () => {
@@ -28,5 +28,39 @@ describe('check form', () => {
     expect(formatExact(12.65, 'voltage_dc')).toBe('12.65 V');
     expect(formatExact(480, 'resistance')).toBe('480 Ω');
     expect(formatExact(0.0005, 'current_dc')).toBe('500 µA');
+  });
+
+  describe('observation choices', () => {
+    const spark = () => fixtureProcedure().checks.find((c) => c.id === 'spark')!;
+
+    it('renames a choice and keeps where it leads', () => {
+      const values = formValuesOf(spark());
+      values.choices[1] = { ...values.choices[1], label: 'No flash at all' };
+      const next = checkFromForm(values, spark());
+      expect(next.kind === 'observe' && next.choices).toEqual([
+        { id: 'flash', label: 'Tester flashes', next: 'ok' },
+        { id: 'none', label: 'No flash at all', next: 'unplug' },
+      ]);
+    });
+
+    it('adds a choice with a fresh id leading where the first way out led, and removes one with its outcome', () => {
+      const values = formValuesOf(spark());
+      const id = newChoiceId(values.choices);
+      expect(id).toBe('choice-3');
+      const added = checkFromForm({ ...values, choices: [...values.choices, { id, label: 'Weak orange flash' }] }, spark());
+      expect(added.kind === 'observe' && added.choices[2]).toEqual({ id: 'choice-3', label: 'Weak orange flash', next: 'ok' });
+      const removed = checkFromForm({ ...values, choices: [values.choices[0], { id, label: 'Weak orange flash' }] }, spark());
+      expect(removed.kind === 'observe' && removed.choices.map((c) => c.id)).toEqual(['flash', 'choice-3']);
+    });
+
+    it('refuses a blank choice, two that say the same, and fewer than two', () => {
+      const values = formValuesOf(spark());
+      expect(() => checkFormSchema.validateSync({ ...values, choices: [values.choices[0], { id: 'x', label: '  ' }] })).toThrow(/Say what the technician sees/);
+      expect(() => checkFormSchema.validateSync({ ...values, choices: [values.choices[0], { id: 'x', label: 'tester FLASHES' }] })).toThrow(/say the same/);
+      expect(() => checkFormSchema.validateSync({ ...values, choices: [values.choices[0]] })).toThrow(/at least two/);
+      // Other kinds carry no choices and are not asked for any.
+      const coil = fixtureProcedure().checks[0];
+      expect(checkFormSchema.isValidSync(formValuesOf(coil))).toBe(true);
+    });
   });
 });

@@ -1,11 +1,12 @@
 import { Formik, useFormikContext } from 'formik';
 import { useEffect, useRef } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { checkFormSchema, checkFromForm, formValuesOf, SPEC_FIELDS, SPEC_LABELS, type CheckFormValues } from '@shared/editor/check-form';
+import { checkFormSchema, checkFromForm, DEFAULT_CHOICES, formValuesOf, MAX_CHOICES, newChoiceId, SPEC_FIELDS, SPEC_LABELS, type CheckFormValues } from '@shared/editor/check-form';
 import { CHECK_KINDS, type Check, type ProcedureDocument } from '@shared/engine/procedure';
 import { QUANTITIES, QUANTITY_INFO } from '@shared/engine/quantity';
 import { SPEC_KINDS } from '@shared/engine/spec';
 import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
 import { Heading, Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { ChipRow } from '@/features/procedures/components/chip-row';
@@ -52,7 +53,10 @@ function Fields({ document, check }: { document: ProcedureDocument; check: Check
   const others = document.checks.filter((c) => c.id !== check.id && c.kind === 'measure');
   return (
     <>
-      <ChipRow label="Kind" testID="form-kind" value={values.kind} onChange={set('kind')} options={CHECK_KINDS.map((k) => ({ value: k, label: k }))} />
+      <ChipRow label="Kind" testID="form-kind" value={values.kind} onChange={(k) => {
+        void setFieldValue('kind', k);
+        if (k === 'observe' && values.choices.length === 0) void setFieldValue('choices', [...DEFAULT_CHOICES]);
+      }} options={CHECK_KINDS.map((k) => ({ value: k, label: k }))} />
       <TextField name="title" label="Title" testID="form-title" />
       <TextField name="instruction" label="Instruction" hint="What to do, in short sentences." testID="form-instruction" />
       {values.kind !== 'finding' ? (
@@ -97,6 +101,7 @@ function Fields({ document, check }: { document: ProcedureDocument; check: Check
           ]} />
         </View>
       ) : null}
+      {values.kind === 'observe' ? <ChoicesFields /> : null}
       {values.kind === 'finding' ? (
         <View style={styles.group}>
           <TextField name="part" label="Faulty part or cause" testID="form-part" />
@@ -108,7 +113,46 @@ function Fields({ document, check }: { document: ProcedureDocument; check: Check
   );
 }
 
+/** The observations the technician picks from; where each one leads is set under Outcomes. */
+function ChoicesFields() {
+  const { values, errors, setFieldValue } = useFormikContext<CheckFormValues>();
+  const choices = values.choices;
+  const whole = typeof errors.choices === 'string' ? errors.choices : null;
+  return (
+    <View style={styles.group} testID="form-choices" role="group" aria-label="Choices">
+      <Text variant="bodyStrong">Choices</Text>
+      <Text variant="small" tone="textMuted">
+        What the technician can observe, one button each. Where each leads is set under Outcomes.
+      </Text>
+      {choices.map((c, i) => (
+        <View key={c.id} style={styles.choice}>
+          <View style={styles.grow}>
+            <TextField name={`choices.${i}.label`} label={`Choice ${i + 1}`} testID={`form-choice-${i}`} />
+          </View>
+          <Button
+            testID={`form-choice-${i}-remove`}
+            label="Remove"
+            ariaLabel={`Remove choice ${i + 1}${c.label ? `, ${c.label}` : ''}`}
+            disabled={choices.length <= 2}
+            onPress={() => void setFieldValue('choices', choices.filter((_, k) => k !== i))}
+          />
+        </View>
+      ))}
+      <FormError testID="form-choices-error" message={whole} />
+      <Button
+        testID="form-choice-add"
+        label="Add a choice"
+        icon="plus"
+        disabled={choices.length >= MAX_CHOICES}
+        onPress={() => void setFieldValue('choices', [...choices, { id: newChoiceId(choices), label: '' }])}
+      />
+    </View>
+  );
+}
+
 const styles = StyleSheet.create({
   form: { gap: space.lg },
   group: { gap: space.md },
+  choice: { flexDirection: 'row', alignItems: 'flex-end', gap: space.sm },
+  grow: { flex: 1 },
 });
