@@ -1,6 +1,6 @@
 import PDFDocument from 'pdfkit';
 import type { PhotoView } from '@shared/api/diagnosis-types';
-import { durationInWords, REPORT_TITLE, SAFETY_NOTE, type ReportLine, type ReportModel } from '@shared/report/report-model';
+import { REPORT_TITLE, SAFETY_NOTE, type ReportLine, type ReportModel } from '@shared/report/report-model';
 import { drawSpecBar, drawVerdictMark, SPEC_BAR_HEIGHT } from './pdf-marks';
 import { PDF_COLOURS as C, PDF_FONT_FILES, PDF_FONTS as F, pdfText } from './pdf-style';
 
@@ -284,7 +284,7 @@ class Layout {
     doc.y = top;
     const right = MARGIN + half + 24;
     if (r.endedAt) this.field(r.status === 'concluded' ? 'Concluded' : 'Stopped', this.input.formatDate(r.endedAt), right, half);
-    this.field('Time spent', r.labour ?? (r.endedAt ? durationInWords(Math.round((Date.parse(r.endedAt) - Date.parse(r.startedAt)) / 60000)) : ''), right, half);
+    this.field('Time spent', r.timeSpent ?? '', right, half);
     doc.y = Math.max(leftBottom, doc.y) + 10;
     doc.font(F.text).fontSize(9);
     this.room(doc.heightOfString(pdfText(SAFETY_NOTE), { width: this.width }));

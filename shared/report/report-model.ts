@@ -49,6 +49,8 @@ export interface ReportModel {
   closingNote: string;
   parts: string;
   labour: string | null;
+  /** The labour booked, or else the time from start to end. */
+  timeSpent: string | null;
   abandonReason: string | null;
   technicians: string[];
   startedAt: string;
@@ -97,6 +99,7 @@ export function buildReport(d: DiagnosisDetail): ReportModel {
 
   const findingCheck = d.conclusion ? checks.get(d.conclusion.findingCheckId) : undefined;
   const { machine } = d.job;
+  const labour = d.conclusion?.labourMinutes == null ? null : durationInWords(d.conclusion.labourMinutes);
   return {
     status: d.status,
     procedure: `${d.procedureTitle}, version ${d.versionNumber}`,
@@ -114,7 +117,8 @@ export function buildReport(d: DiagnosisDetail): ReportModel {
     finding: findingCheck?.kind === 'finding' ? { title: findingCheck.title, ...findingCheck.finding } : null,
     closingNote: d.conclusion?.note ?? '',
     parts: d.conclusion?.parts ?? '',
-    labour: d.conclusion?.labourMinutes == null ? null : durationInWords(d.conclusion.labourMinutes),
+    labour,
+    timeSpent: labour ?? (d.endedAt ? durationInWords(Math.round((Date.parse(d.endedAt) - Date.parse(d.startedAt)) / 60_000)) : null),
     abandonReason: d.abandonReason,
     technicians: [...new Set([d.startedBy, ...live.map((s) => s.by)])],
     startedAt: d.startedAt,
@@ -124,7 +128,7 @@ export function buildReport(d: DiagnosisDetail): ReportModel {
 }
 
 /** 95 → "1 h 35 min". */
-export function durationInWords(minutes: number): string {
+function durationInWords(minutes: number): string {
   const h = Math.floor(minutes / 60);
   const m = minutes % 60;
   if (h === 0) return `${m} min`;

@@ -41,7 +41,7 @@ export function OutboxScreen() {
     <Screen
       testID="outbox-screen"
       title="Outbox"
-      subtitle="Every e-mail Probepath sent for this shop: invites and password links. Links open in a new tab."
+      subtitle="Every e-mail Probepath sent for this shop: invites, password links and customer reports. Links open in a new tab."
     >
       <OutboxBody selectedId={id} split={isDesk} />
     </Screen>

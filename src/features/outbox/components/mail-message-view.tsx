@@ -15,7 +15,7 @@ export function MailMessageView({ id }: { id: string }) {
     return <ErrorState title="Couldn't open this message" error={message.error} onRetry={() => void message.mutate()} />;
   }
   if (!message.data) return <LoadingState label="Opening the message…" />;
-  const { subject, from, to, createdAt, text } = message.data.message;
+  const { subject, from, to, createdAt, text, attachments } = message.data.message;
   return (
     <View style={styles.message} testID="mail-message">
       <Heading level={2}>{subject}</Heading>
@@ -23,6 +23,11 @@ export function MailMessageView({ id }: { id: string }) {
         <Text tone="textMuted">From {from}</Text>
         <Text tone="textMuted">To {to}</Text>
         <Text tone="textMuted">{formatDateTime(createdAt)}</Text>
+        {attachments.map((a) => (
+          <Text key={a.filename} tone="textMuted" testID="mail-attachment">
+            Attached: {a.filename} ({Math.max(1, Math.round(a.size / 1024))} KB)
+          </Text>
+        ))}
       </View>
       <MailBody text={text} />
     </View>

@@ -1,0 +1,1 @@
+export { ReportScreen as default } from '@/features/report/report-screen';
