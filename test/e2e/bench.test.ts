@@ -1,7 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DiagnosisDetail } from '@shared/api/diagnosis-types';
-import { DEMO_PASSWORD, apiAs, demo, launchBrowser, openPage, type RunningServer, SIZES, type Size, shot, signIn, startServer } from './support';
+import { DEMO_PASSWORD, apiAs, demo, launchBrowser, openPage, type RunningServer, SIZES, type Size, seriousViolations, shot, signIn, startServer } from './support';
 
 /**
  * The technician's whole run at the bench, on the demo shop's "cranks, no spark" procedure (invented demo
@@ -22,6 +22,10 @@ afterAll(async () => {
 });
 
 const CUSTOMERS: Record<Size, string> = { phone: 'Wynne Calloway', desk: 'Idris Penrose' };
+
+async function expectAccessible(page: Page, where: string) {
+  expect(await seriousViolations(page), where).toEqual([]);
+}
 
 async function checkIs(page: Page, title: string) {
   await page.getByTestId('check-title').filter({ hasText: title }).waitFor();
@@ -52,6 +56,7 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     await signIn(page, tech.email, DEMO_PASSWORD, 'bench');
     await page.getByTestId('bench-open-mine').waitFor();
     await shot(page, size, 'bench-home');
+    await expectAccessible(page, 'my bench');
 
     // Start: a new job for a new machine, with a VIN whose check digit is off.
     await page.getByTestId('bench-start').click();
@@ -71,6 +76,7 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     await page.getByTestId('vin-check').waitFor();
     expect(await page.getByTestId('vin-check').textContent()).toContain('check digit');
     await shot(page, size, 'bench-new-job', page.getByTestId('vin-check'));
+    await expectAccessible(page, 'new job');
     await page.getByTestId('new-job-submit').click();
 
     // A published procedure for the complaint; the one for this machine's family comes first.
@@ -87,6 +93,7 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     await page.getByTestId('procedure-cautions').waitFor();
     expect(await page.getByTestId('manual-first').textContent()).toContain('service manual, local codes and licensed practice come first');
     await shot(page, size, 'bench-start-cautions');
+    await expectAccessible(page, 'cautions before the first check');
     await page.getByTestId('start-diagnosis').click();
     await page.waitForURL('**/bench/diagnosis/**');
     const id = page.url().split('/').at(-1)!;
@@ -124,6 +131,7 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     expect(await page.getByTestId('verdict-word').textContent()).toBe('Marginal');
     expect(await page.getByTestId('verdict').textContent()).toContain('437 Ω');
     await shot(page, size, 'bench-check-marginal', page.getByTestId('spec'));
+    await expectAccessible(page, 'measure check with a verdict');
     await page.getByTestId('record-reading').click();
     await page.getByTestId('check-details').getByText('CHECK 6').waitFor();
 
@@ -143,6 +151,7 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     await withPath(page, size, async () => {
       expect(await page.getByText('Pending · on this phone').count()).toBe(2);
       await shot(page, size, 'bench-path-pending', page.getByText('Pending · on this phone').last());
+      await expectAccessible(page, 'path with pending and taken-back steps');
     });
     await shot(page, size, 'bench-check-offline');
 
@@ -184,6 +193,7 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     await page.getByTestId('conclude').click();
     await page.getByTestId('conclusion').waitFor();
     await shot(page, size, 'bench-concluded');
+    await expectAccessible(page, 'concluded diagnosis');
     const after = await get<{ diagnosis: DiagnosisDetail }>(`/api/diagnoses/${id}`);
     expect(after.diagnosis.status).toBe('concluded');
     expect(after.diagnosis.conclusion).toMatchObject({ findingCheckId: 'finding-sensor-harness', labourMinutes: 95 });
@@ -204,6 +214,46 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     const title = await page.getByTestId('check-title').textContent();
     await page.reload();
     await checkIs(page, title!);
+    await context.close();
+  });
+
+  it('the bench says what it is waiting for, what went wrong and what to do, and has a designed empty state', async () => {
+    const { context, page } = await openPage(browser, server.url, size);
+    await signIn(page, demo('tech').email, DEMO_PASSWORD, 'bench');
+    const lists = /\/api\/diagnoses\?status=/;
+
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    await page.route(lists, async (route) => {
+      await held;
+      await route.continue();
+    });
+    await page.reload();
+    await page.getByTestId('loading-state').waitFor();
+    await shot(page, size, 'bench-loading');
+    release();
+    await page.getByTestId('bench-open-mine').waitFor();
+    await page.unroute(lists);
+
+    await page.route(lists, (route) => route.fulfill({ json: { diagnoses: [] } }));
+    await page.reload();
+    await page.getByTestId('empty-state').waitFor();
+    await shot(page, size, 'bench-empty');
+    await expectAccessible(page, 'empty bench');
+    await page.unroute(lists);
+
+    await page.route(lists, (route) => route.abort());
+    await page.reload();
+    await page.getByTestId('error-state').waitFor();
+    expect(await page.getByTestId('error-state').textContent()).toContain('could not reach the server');
+    await shot(page, size, 'bench-unreachable');
+    await page.unroute(lists);
+    await page.getByTestId('retry').click();
+    await page.getByTestId('bench-open-mine').waitFor();
+
+    await page.goto('/bench/diagnosis/00000000-0000-4000-8000-000000000000');
+    await page.getByTestId('diagnosis-missing').waitFor();
+    await shot(page, size, 'bench-diagnosis-missing');
     await context.close();
   });
 });

@@ -105,3 +105,26 @@ export async function apiAs(baseURL: string, email: string, password: string) {
     return (await response.json()) as T;
   };
 }
+
+const AXE_SOURCE = fs.readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8');
+
+/**
+ * Serious and critical WCAG 2.2 A/AA violations on the page as it stands, per axe-core, each in words with
+ * where it is. Evaluated through the browser's debugging channel, which the app's CSP does not govern.
+ */
+export async function seriousViolations(page: Page): Promise<string[]> {
+  await page.evaluate(() => document.fonts.ready);
+  await page.evaluate(`${AXE_SOURCE};0`);
+  const { violations, passes } = await page.evaluate(async () => {
+    type Result = { violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[]; passes: unknown[] };
+    const axe = (window as unknown as { axe: { run(ctx: Document, opts: object): Promise<Result> } }).axe;
+    const r = await axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'] } });
+    return { violations: r.violations, passes: r.passes.length };
+  });
+  // A page that drew nothing would pass every rule.
+  if (passes < 10) return [`only ${passes} rules passed: the page looks empty`];
+  return violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.id}: ${v.help} at ${v.nodes.map((n) => n.target.join(' ')).slice(0, 3).join(', ')}`);
+}
+

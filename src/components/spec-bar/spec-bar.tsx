@@ -28,6 +28,7 @@ const MONO_ADVANCE = 0.6;
 const OL_ZONE = 46;
 const OL_GAP = 10;
 const PAD = 4;
+const LABEL_GAP = 16;
 
 /**
  * The spec as a picture: a horizontal scale with the acceptance window, the marginal bands either side of
@@ -119,7 +120,8 @@ function Drawing({ geometry: g, width, height, compact, colors: c, hatchId, fmt 
       {/* Over range lives past a break in the scale. */}
       <Path d={`M${right + 2} ${trackTop + 4}l6 ${trackHeight / 2 - 4}-6 ${trackHeight / 2 - 4}`} stroke={c.borderStrong} strokeWidth={1.5} fill="none" />
       <Rect x={olLeft} y={trackTop} width={OL_ZONE} height={trackHeight} rx={4} fill={olFill} opacity={g.overRangePasses ? 0.32 : 1} stroke={c.borderStrong} strokeWidth={1} />
-      <SvgText x={olLeft + OL_ZONE / 2} y={trackTop + trackHeight / 2 + labelSize * 0.35} fill={c.text} fontSize={labelSize} fontFamily={fonts.monoBold} textAnchor="middle">
+      {/* With an OL reading its marker takes the zone's right side and the word moves left. */}
+      <SvgText x={olLeft + (marker?.kind === 'over_range' ? OL_ZONE * 0.36 : OL_ZONE / 2)} y={trackTop + trackHeight / 2 + labelSize * 0.35} fill={c.text} fontSize={labelSize} fontFamily={fonts.monoBold} textAnchor="middle">
         OL
       </SvgText>
 
@@ -138,7 +140,7 @@ function Drawing({ geometry: g, width, height, compact, colors: c, hatchId, fmt 
         <ValueMarker x={x(marker.at)} interval={marker.interval && [x(marker.interval.from), x(marker.interval.to)]} beyond={marker.beyond} label={compact ? null : fmt(marker.value)} trackTop={trackTop} trackBottom={trackBottom} left={left} right={right} c={c} />
       ) : null}
       {marker?.kind === 'over_range' ? (
-        <ValueMarker x={olLeft + OL_ZONE / 2} interval={null} beyond={null} label={compact ? null : 'OL'} trackTop={trackTop} trackBottom={trackBottom} left={left} right={width - PAD} c={c} />
+        <ValueMarker x={olLeft + OL_ZONE * 0.8} interval={null} beyond={null} label={compact ? null : 'OL'} trackTop={trackTop} trackBottom={trackBottom} left={left} right={width - PAD} c={c} />
       ) : null}
     </Svg>
   );
@@ -199,7 +201,7 @@ function spreadLabels(labels: Label[], left: number, right: number): Label[] {
   const placed = labels.map((l) => ({ ...l }));
   if (placed.length === 2) {
     const [a, b] = placed;
-    const overlap = a.cx + a.w / 2 + 8 - (b.cx - b.w / 2);
+    const overlap = a.cx + a.w / 2 + LABEL_GAP - (b.cx - b.w / 2);
     if (overlap > 0) {
       a.cx -= overlap / 2;
       b.cx += overlap / 2;

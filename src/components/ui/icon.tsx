@@ -94,27 +94,6 @@ const drawings = {
   note: <Path d="M5 3.5h10l4 4v13H5zM14.5 3.5v4.5h4.5M8.5 12h7M8.5 16h5" />,
   report: <Path d="M6 2.5h9l4 4v15H6zM9.5 11h6M9.5 14.5h6M9.5 18h4" />,
   caution: <Path d="M12 2.5l9.5 9.5-9.5 9.5L2.5 12zM12 8v5M12 16v.5" />,
-  verdictInSpec: (
-    <>
-      <Circle cx={12} cy={12} r={9.5} />
-      <Path d="M7.5 12.5l3 3 6-6.5" />
-    </>
-  ),
-  verdictLow: <Path d="M3 6.5h18L12 20z" />,
-  verdictHigh: <Path d="M3 17.5h18L12 4z" />,
-  verdictOpen: <Path d="M2 12h6M16 12h6M8 12l7-5.5M8 12v.01M16 12v.01" />,
-  verdictMarginal: (
-    <>
-      <Path d="M12 2l10 10-10 10L2 12z" />
-      <Path d="M7.5 12.5c1.5-2 3-2 4.5 0s3 2 4.5 0" />
-    </>
-  ),
-  verdictNone: (
-    <>
-      <Circle cx={12} cy={12} r={9.5} />
-      <Path d="M7.5 12h9" />
-    </>
-  ),
 } as const;
 
 export type IconName = keyof typeof drawings;

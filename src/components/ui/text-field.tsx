@@ -6,7 +6,7 @@ import { Text } from '@/components/ui/text';
 import { radius, space, type, useTheme } from '@/lib/theme';
 
 interface TextFieldProps
-  extends Pick<TextInputProps, 'autoComplete' | 'keyboardType' | 'textContentType' | 'autoFocus' | 'inputMode'> {
+  extends Pick<TextInputProps, 'autoComplete' | 'keyboardType' | 'textContentType' | 'autoFocus' | 'inputMode' | 'multiline'> {
   /** The formik field this input edits. */
   name: string;
   label: string;
@@ -15,7 +15,7 @@ interface TextFieldProps
   testID: string;
 }
 
-/** A labelled input bound to the surrounding Formik form; Enter submits it. */
+/** A labelled input bound to the surrounding Formik form; Enter submits it (a multiline one takes Enter as a new line). */
 export function TextField({ name, label, hint, secret = false, testID, ...inputProps }: TextFieldProps) {
   const colors = useTheme();
   const [field, meta, helpers] = useField<string>(name);
@@ -44,13 +44,14 @@ export function TextField({ name, label, hint, secret = false, testID, ...inputP
             setFocused(false);
             void helpers.setTouched(true);
           }}
-          onSubmitEditing={() => void submitForm()}
+          onSubmitEditing={inputProps.multiline ? undefined : () => void submitForm()}
           secureTextEntry={secret && !revealed}
           autoCapitalize="none"
           autoCorrect={false}
           placeholderTextColor={colors.textMuted}
           style={[
             styles.input,
+            inputProps.multiline ? styles.multiline : null,
             type.body,
             {
               color: colors.text,
@@ -83,4 +84,5 @@ const styles = StyleSheet.create({
   field: { gap: space.xs },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   input: { flex: 1, minHeight: 52, borderRadius: radius.md, paddingHorizontal: space.md, paddingVertical: space.sm },
+  multiline: { minHeight: 96, textAlignVertical: 'top' },
 });

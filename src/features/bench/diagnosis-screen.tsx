@@ -1,8 +1,9 @@
 import { useKeepAwake } from 'expo-keep-awake';
-import { useLocalSearchParams } from 'expo-router';
+import { useLocalSearchParams, useRouter } from 'expo-router';
 import Head from 'expo-router/head';
 import { useState } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
+import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Heading } from '@/components/ui/text';
@@ -23,6 +24,7 @@ export function DiagnosisScreen() {
   useKeepAwake(undefined, { suppressDeactivateWarnings: true });
   const { id } = useLocalSearchParams<{ id: string }>();
   const bench = useBenchDiagnosis(id);
+  const router = useRouter();
   const colors = useTheme();
   const { isWide } = useBreakpoints();
   const [view, setView] = useState<'check' | 'path'>('check');
@@ -31,7 +33,19 @@ export function DiagnosisScreen() {
   if (!detail || !local) {
     return (
       <View style={[styles.fill, { backgroundColor: colors.background }]} testID="diagnosis-screen">
-        {bench.error ? <ErrorState title="Can't open this diagnosis" error={bench.error} onRetry={bench.retryLoad} /> : <LoadingState label="Opening the diagnosis…" />}
+        {bench.error?.status === 404 ? (
+          <EmptyState
+            testID="diagnosis-missing"
+            icon="unplugged"
+            title="No such diagnosis in your shop"
+            body="The link may be incomplete, or the diagnosis belongs to another shop. Open diagnoses are listed on your bench."
+            action={{ label: 'Go to my bench', testID: 'diagnosis-missing-bench', onPress: () => router.navigate('/bench') }}
+          />
+        ) : bench.error ? (
+          <ErrorState title="Can't open this diagnosis" error={bench.error} onRetry={bench.retryLoad} />
+        ) : (
+          <LoadingState label="Opening the diagnosis…" />
+        )}
       </View>
     );
   }

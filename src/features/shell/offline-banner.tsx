@@ -11,7 +11,7 @@ export function OfflineBanner({ onRetry }: { onRetry: () => void }) {
     <View testID="session-offline" role="status" style={[styles.bar, { backgroundColor: colors.warningSoft, borderBottomColor: colors.warning }]}>
       <Icon name="unplugged" color={colors.warning} />
       <Text variant="small" style={styles.message}>
-        Can't reach Probepath. Readings you record are kept on this device and sent when the connection is back.
+        Can't reach Probepath. Work carries on from this device.
       </Text>
       <Button testID="session-retry" label="Try again" variant="quiet" onPress={onRetry} />
     </View>

@@ -69,7 +69,7 @@ export function FindingStep({ detail, local, check, number, onBack, status }: St
           <View style={styles.fields}>
             <TextField name="parts" label="Parts used" hint="Optional, e.g. pulse coil, connector pigtail" testID="conclude-parts" />
             <TextField name="labourMinutes" label="Labour, minutes" hint="Optional; the time spent on the diagnosis and repair" testID="conclude-labour" inputMode="numeric" />
-            <TextField name="note" label="Closing note" hint="What you repaired and how you proved the fix" testID="conclude-note" />
+            <TextField name="note" label="Closing note" hint="What you repaired and how you proved the fix" testID="conclude-note" multiline />
           </View>
         </StepFrame>
       )}
