@@ -31,3 +31,20 @@ export function zoomBy(view: Viewport, direction: 1 | -1, pane: { width: number;
 export function centreOn(view: Viewport, point: { x: number; y: number }, pane: { width: number; height: number }): Viewport {
   return { scale: view.scale, x: pane.width / 2 - point.x * view.scale, y: pane.height / 2 - point.y * view.scale };
 }
+
+/**
+ * Two diagrams to show at once (a comparison): beside each other or one above the other, whichever lets
+ * the smaller of the two fitted scales be larger. `gap` is the space between the panes and `chrome` what
+ * each pane spends on its own heading and zoom tools above the drawing.
+ */
+export function bestArrangement(
+  diagrams: readonly [{ width: number; height: number }, { width: number; height: number }],
+  area: { width: number; height: number },
+  gap: number,
+  chrome: number,
+): 'row' | 'column' {
+  const smallerScale = (pane: { width: number; height: number }) => Math.min(...diagrams.map((d) => fitToView(d, pane).scale));
+  const row = smallerScale({ width: (area.width - gap) / 2, height: area.height - chrome });
+  const column = smallerScale({ width: area.width, height: (area.height - gap) / 2 - chrome });
+  return column > row ? 'column' : 'row';
+}

@@ -129,6 +129,18 @@ describe('the lead at a desk', () => {
     await page.getByTestId('procedure-diagram-zoom-fit').click();
     await shot(page, 'desk', 'editor');
 
+    // Dragging the diagram pans it; Fit brings the whole of it back.
+    const drawing = page.locator('[data-testid="procedure-diagram"] svg > g').first();
+    const fitted = await drawing.getAttribute('transform');
+    const box = (await page.getByTestId('procedure-diagram').boundingBox())!;
+    await page.mouse.move(box.x + box.width / 2, box.y + 40);
+    await page.mouse.down();
+    await page.mouse.move(box.x + box.width / 2 + 80, box.y + 100, { steps: 8 });
+    await page.mouse.up();
+    expect(await drawing.getAttribute('transform')).not.toBe(fitted);
+    await page.getByTestId('procedure-diagram-zoom-fit').click();
+    expect(await drawing.getAttribute('transform')).toBe(fitted);
+
     // Preview: the coil in spec, no flash, the task, the finding.
     const asLead = await apiAs(server.url, lead.email, DEMO_PASSWORD);
     const before = await asLead<{ diagnoses: unknown[] }>('/api/diagnoses');

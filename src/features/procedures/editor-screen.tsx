@@ -211,7 +211,7 @@ function Editor({ procedureId, title, loaded, onCopied, onBack, onDraftStarted }
         <ScrollView style={[styles.left, { borderRightColor: colors.border }]} contentContainerStyle={styles.pad}>
           <View style={styles.addRow}>
             {CHECK_KINDS.map((k) => (
-              <Button key={k} testID={`add-${k}`} label={k} icon="plus" onPress={() => {
+              <Button key={k} testID={`add-${k}`} label={k} icon="plus" style={styles.addKind} onPress={() => {
                 const added = addCheck(document, k);
                 editor.edit(added.document);
                 setSelectedId(added.id);
@@ -277,6 +277,7 @@ const styles = StyleSheet.create({
   right: { width: 400, flexGrow: 0, borderLeftWidth: 1 },
   pad: { padding: space.md, gap: space.lg },
   addRow: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
+  addKind: { flexBasis: '46%', flexGrow: 1, paddingHorizontal: space.sm },
   tabs: { flexDirection: 'row', gap: space.xs },
   tab: { flex: 1, paddingHorizontal: space.sm },
 });

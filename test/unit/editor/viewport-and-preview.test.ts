@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { previewStep, type PreviewStep } from '@shared/editor/preview';
-import { fitToView, MAX_SCALE, zoomBy } from '@shared/editor/viewport';
+import { bestArrangement, fitToView, MAX_SCALE, zoomBy } from '@shared/editor/viewport';
 import { fixtureProcedure } from '../../support/fixture-procedure';
 
 describe('diagram viewport', () => {
@@ -17,6 +17,20 @@ describe('diagram viewport', () => {
     let v = view;
     for (let i = 0; i < 20; i++) v = zoomBy(v, 1, pane);
     expect(v.scale).toBe(MAX_SCALE);
+  });
+});
+
+describe('two diagrams compared', () => {
+  const area = { width: 1000, height: 800 };
+
+  it('sets wide diagrams one above the other, where each can be drawn larger', () => {
+    const wide = { width: 900, height: 300 };
+    expect(bestArrangement([wide, wide], area, 16, 60)).toBe('column');
+  });
+
+  it('sets tall diagrams beside each other', () => {
+    const tall = { width: 300, height: 900 };
+    expect(bestArrangement([tall, { width: 250, height: 700 }], area, 16, 60)).toBe('row');
   });
 });
 

@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { StyleSheet, TextInput, View } from 'react-native';
 import { checkUncertainty, windowOnly } from '@shared/diagnosis/spec-bar-geometry';
 import { VERDICT_WORDS } from '@shared/diagnosis/verdict-words';
@@ -24,6 +24,11 @@ export function PreviewPanel({ document, onShowCheck }: { document: ProcedureDoc
   const currentId = steps.length ? steps[steps.length - 1].decision.nextCheckId : document.startCheckId;
   const current = document.checks.find((c) => c.id === currentId);
   const titleOf = (id: string) => document.checks.find((c) => c.id === id)?.title ?? `“${id}” (not in the draft)`;
+  // Opening the preview shows where the walk stands on the diagram.
+  // eslint-disable-next-line react-hooks/exhaustive-deps
+  useEffect(() => {
+    onShowCheck(currentId);
+  }, []);
 
   const go = (step: PreviewStep) => {
     setSteps((s) => [...s, step]);

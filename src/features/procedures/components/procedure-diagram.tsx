@@ -1,5 +1,5 @@
-import { useMemo, useState } from 'react';
-import { type LayoutChangeEvent, StyleSheet, View } from 'react-native';
+import { useMemo, useRef, useState } from 'react';
+import { type LayoutChangeEvent, PanResponder, StyleSheet, View } from 'react-native';
 import Svg, { G, Path, Polygon, Rect, Text as SvgText } from 'react-native-svg';
 import type { CheckKind, ProcedureDocument } from '@shared/engine/procedure';
 import { centreOn, fitToView, type Viewport, zoomBy } from '@shared/editor/viewport';
@@ -20,31 +20,59 @@ interface DiagramProps {
   marks?: ReadonlyMap<string, DiagramMark>;
   /** Names the diagram to screen readers when two are side by side. */
   label?: string;
+  /** Shown at the start of the zoom tools, for a diagram that is one of two. */
+  heading?: string;
   testID?: string;
 }
 
 /** The procedure as a picture: one shape per check kind, outcomes as labelled arrows; press a check to select it. */
-export function ProcedureDiagram({ document, selectedId, flagged, onSelect, marks, label = 'Diagram', testID = 'procedure-diagram' }: DiagramProps) {
+export function ProcedureDiagram({ document, selectedId, flagged, onSelect, marks, label = 'Diagram', heading, testID = 'procedure-diagram' }: DiagramProps) {
   const colors = useTheme();
   const layout = useMemo(() => layoutProcedure(document), [document]);
   const [pane, setPane] = useState({ width: 0, height: 0 });
   const [view, setView] = useState<Viewport | null>(null);
   const shown = view ?? fitToView(layout, pane);
   const onLayout = (e: LayoutChangeEvent) => setPane({ width: e.nativeEvent.layout.width, height: e.nativeEvent.layout.height });
+  // Dragging pans; a press without movement still reaches the check under it.
+  const shownRef = useRef(shown);
+  shownRef.current = shown;
+  const dragFrom = useRef<Viewport | null>(null);
+  const pan = useMemo(
+    () =>
+      PanResponder.create({
+        onMoveShouldSetPanResponder: (_e, g) => Math.abs(g.dx) + Math.abs(g.dy) > 6,
+        onPanResponderGrant: () => {
+          dragFrom.current = shownRef.current;
+        },
+        onPanResponderMove: (_e, g) => {
+          const from = dragFrom.current;
+          if (from) setView({ ...from, x: from.x + g.dx, y: from.y + g.dy });
+        },
+        onPanResponderRelease: () => {
+          dragFrom.current = null;
+        },
+      }),
+    [],
+  );
   const selected = layout.nodes.find((n) => n.id === selectedId);
 
   return (
     <View style={[styles.wrap, { backgroundColor: colors.surfaceSunken, borderColor: colors.border }]}>
       <View style={styles.tools}>
+        {heading ? (
+          <Text variant="bodyStrong" style={styles.heading}>
+            {heading}
+          </Text>
+        ) : null}
         <Text variant="label" tone="textMuted">
           {`${Math.round(shown.scale * 100)} %`}
         </Text>
         <Button testID={`${testID}-zoom-out`} label="Zoom out" hideLabel icon="zoomOut" onPress={() => setView(zoomBy(shown, -1, pane))} />
         <Button testID={`${testID}-zoom-in`} label="Zoom in" hideLabel icon="zoomIn" onPress={() => setView(zoomBy(shown, 1, pane))} />
         <Button testID={`${testID}-zoom-fit`} label="Fit" icon="fit" onPress={() => setView(null)} />
-        {selected ? <Button testID={`${testID}-zoom-selected`} label="Show selected" onPress={() => setView(centreOn({ ...shown, scale: Math.max(shown.scale, 0.8) }, selected, pane))} /> : null}
+        {selected ? <Button testID={`${testID}-zoom-selected`} label="Show selected" onPress={() => setView(centreOn({ ...shown, scale: Math.max(shown.scale, 1) }, selected, pane))} /> : null}
       </View>
-      <View style={styles.canvas} onLayout={onLayout} testID={testID} role="img" aria-label={`${label} of ${document.checks.length} checks${onSelect ? '; use the check list to select one' : ''}.`}>
+      <View style={styles.canvas} onLayout={onLayout} {...pan.panHandlers} testID={testID} role="img" aria-label={`${label} of ${document.checks.length} checks${onSelect ? '; use the check list to select one' : ''}.`}>
         {pane.width > 0 ? (
           <Svg width={pane.width} height={pane.height}>
             <G transform={`translate(${shown.x} ${shown.y}) scale(${shown.scale})`}>
@@ -68,7 +96,7 @@ export function ProcedureDiagram({ document, selectedId, flagged, onSelect, mark
                 <G key={n.id} onPress={onSelect ? () => onSelect(n.id) : undefined}>
                   {mark ? <MarkOutline node={n} mark={mark} colors={colors} /> : null}
                   <NodeShape node={n} colors={colors} selected={n.id === selectedId} flagged={flagged.has(n.id)} />
-                  <SvgText x={n.x} y={n.y - n.height / 2 + 15} fontSize={11} fontFamily={fonts.semiBold} fill={colors.textMuted} textAnchor="middle">
+                  <SvgText x={n.x} y={n.y - n.height / 2 + 15} fontSize={12} fontFamily={fonts.semiBold} fill={colors.textMuted} textAnchor="middle">
                     {`${KIND_WORD[n.kind]}${n.id === document.startCheckId ? ' · start' : ''}${flagged.has(n.id) ? ' · fix' : ''}`}
                   </SvgText>
                   {mark ? <MarkTag node={n} mark={mark} colors={colors} /> : null}
@@ -182,5 +210,6 @@ function arrowHead(points: { x: number; y: number }[]): string {
 const styles = StyleSheet.create({
   wrap: { flex: 1, borderWidth: 1, borderRadius: radius.lg, overflow: 'hidden' },
   tools: { flexDirection: 'row', alignItems: 'center', gap: space.sm, padding: space.sm, justifyContent: 'flex-end' },
-  canvas: { flex: 1, minHeight: 320 },
+  heading: { flex: 1 },
+  canvas: { flex: 1, minHeight: 160 },
 });

@@ -1,6 +1,7 @@
-import { type ReactNode, useMemo } from 'react';
-import { ScrollView, StyleSheet, View } from 'react-native';
+import { type ReactNode, useMemo, useState } from 'react';
+import { type LayoutChangeEvent, ScrollView, StyleSheet, View } from 'react-native';
 import { diffVersions, isUnchanged, type FieldChange, type VersionDiff } from '@shared/editor/version-diff';
+import { bestArrangement } from '@shared/editor/viewport';
 import type { ProcedureDocument } from '@shared/engine/procedure';
 import { Badge } from '@/components/ui/badge';
 import { ErrorState } from '@/components/ui/error-state';
@@ -9,6 +10,7 @@ import { Button } from '@/components/ui/button';
 import { Heading, Text } from '@/components/ui/text';
 import { type DiagramMark, ProcedureDiagram } from '@/features/procedures/components/procedure-diagram';
 import { useProcedureVersion } from '@/hooks/use-procedures';
+import { layoutProcedure } from '@/lib/procedure-layout';
 import { radius, space, useTheme } from '@/lib/theme';
 
 export interface ComparedVersion {
@@ -36,6 +38,9 @@ export function VersionCompareLoader({ procedureId, before, after, draft, onClos
 }
 
 const NO_FLAGS: ReadonlySet<string> = new Set();
+const PANE_GAP = space.md;
+/** A pane's heading and zoom tools above its drawing. */
+const PANE_CHROME = 64;
 
 /**
  * Two versions side by side: each diagram marks what differs (removed and changed on the earlier one, new
@@ -45,6 +50,13 @@ export function VersionCompare({ before, after, onClose }: { before: ComparedVer
   const colors = useTheme();
   const diff = useMemo(() => diffVersions(before.document, after.document), [before.document, after.document]);
   const marks = useMemo(() => marksOf(diff), [diff]);
+  const [area, setArea] = useState({ width: 0, height: 0 });
+  const arrangement = useMemo(
+    () => (area.width ? bestArrangement([layoutProcedure(before.document), layoutProcedure(after.document)], area, PANE_GAP, PANE_CHROME) : 'row'),
+    [area, before.document, after.document],
+  );
+  // The measured box includes its padding on each side.
+  const onLayout = (e: LayoutChangeEvent) => setArea({ width: e.nativeEvent.layout.width - 2 * space.md, height: e.nativeEvent.layout.height - 2 * space.md });
   return (
     <View style={styles.wrap} testID="version-compare">
       <View style={[styles.head, { borderBottomColor: colors.border }]}>
@@ -52,14 +64,12 @@ export function VersionCompare({ before, after, onClose }: { before: ComparedVer
         <Button testID="compare-close" label="Close comparison" onPress={onClose} />
       </View>
       <View style={styles.body}>
-        <View style={styles.diagrams}>
+        <View style={[styles.diagrams, arrangement === 'column' && styles.stacked]} onLayout={onLayout} testID={`compare-diagrams-${arrangement}`}>
           <View style={styles.side}>
-            <Text variant="bodyStrong">{before.name}</Text>
-            <ProcedureDiagram testID="compare-before" label={before.name} document={before.document} selectedId={null} flagged={NO_FLAGS} marks={marks.before} />
+            <ProcedureDiagram testID="compare-before" label={before.name} heading={before.name} document={before.document} selectedId={null} flagged={NO_FLAGS} marks={marks.before} />
           </View>
           <View style={styles.side}>
-            <Text variant="bodyStrong">{after.name}</Text>
-            <ProcedureDiagram testID="compare-after" label={after.name} document={after.document} selectedId={null} flagged={NO_FLAGS} marks={marks.after} />
+            <ProcedureDiagram testID="compare-after" label={after.name} heading={after.name} document={after.document} selectedId={null} flagged={NO_FLAGS} marks={marks.after} />
           </View>
         </View>
         <ScrollView style={[styles.list, { borderLeftColor: colors.border }]} contentContainerStyle={styles.listPad} testID="compare-changes">
@@ -170,9 +180,10 @@ const styles = StyleSheet.create({
   head: { flexDirection: 'row', alignItems: 'center', gap: space.md, paddingHorizontal: space.lg, paddingVertical: space.sm, borderBottomWidth: 1 },
   grow: { flex: 1 },
   body: { flex: 1, flexDirection: 'row' },
-  diagrams: { flex: 1, flexDirection: 'row', gap: space.md, padding: space.md },
-  side: { flex: 1, gap: space.xs },
-  list: { width: 440, flexGrow: 0, borderLeftWidth: 1 },
+  diagrams: { flex: 1, flexDirection: 'row', gap: PANE_GAP, padding: space.md },
+  stacked: { flexDirection: 'column' },
+  side: { flex: 1 },
+  list: { width: 380, flexGrow: 0, borderLeftWidth: 1 },
   listPad: { padding: space.md },
   sections: { gap: space.lg },
   section: { gap: space.sm },
