@@ -1,3 +1,4 @@
+import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DiagnosisDetail } from '@shared/api/diagnosis-types';
@@ -124,6 +125,12 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     await read(page, '680', 'mV');
     await record(page, 'Pulse coil resistance');
 
+    // A photo on the step just recorded, from the check screen.
+    const checkScreen = page.getByTestId('measure-step');
+    await checkScreen.getByTestId('add-photo-5-input').setInputFiles(path.resolve(__dirname, '../fixtures/photos/connector.jpg'));
+    await checkScreen.getByTestId('photos-5-0').waitFor();
+    expect(await checkScreen.getByTestId('add-photo-5').textContent()).toContain('1 so far');
+
     // A reading in another prefix than the spec, close enough to a limit to be marginal: measure again.
     await shot(page, size, 'bench-check-measure');
     await read(page, '0.437k');
@@ -198,6 +205,7 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     expect(after.diagnosis.status).toBe('concluded');
     expect(after.diagnosis.conclusion).toMatchObject({ findingCheckId: 'finding-sensor-harness', labourMinutes: 95 });
     expect(after.diagnosis.steps.filter((s) => !s.retracted)).toHaveLength(9);
+    expect(after.diagnosis.photos.map((p) => p.stepId)).toEqual([after.diagnosis.steps.find((s) => s.seq === 5)!.id]);
 
     await page.getByTestId('open-report').click();
     await page.waitForURL(`**/report/${id}`);

@@ -13,8 +13,10 @@ import { CheckStep } from './components/check-step';
 import { ClosedDiagnosis } from './components/closed-diagnosis';
 import { DiagnosisHeader } from './components/diagnosis-header';
 import { PathList } from './components/path-list';
+import { StepPhotos } from './components/step-photos';
 import { SyncStatus } from './components/sync-status';
 import { useBenchDiagnosis } from './hooks/use-bench-diagnosis';
+import type { PathStep } from './offline/local-path';
 
 /**
  * Running a diagnosis at the bench, one check at a time. Opens where the diagnosis stands (on any device),
@@ -52,10 +54,14 @@ export function DiagnosisScreen() {
 
   const liveSteps = local.steps.filter((s) => !s.retracted).length;
   const check = detail.document.checks.find((c) => c.id === local.currentCheckId);
+  const titleOf = (checkId: string) => detail.document.checks.find((c) => c.id === checkId)?.title ?? checkId;
+  const photosOf = (step: PathStep) =>
+    step.state === 'recorded' && step.seq !== null && !step.retracted ? <StepPhotos diagnosisId={detail.id} stepId={step.key} seq={step.seq} of={titleOf(step.checkId)} /> : null;
+  const lastRecorded = [...local.steps].reverse().find((s) => !s.retracted);
   const path = (
     <ScrollView contentContainerStyle={styles.pathContent} testID="path-panel">
       <Heading level={2}>Path</Heading>
-      <PathList document={detail.document} local={local} onDismissNotRecorded={bench.dismissNotRecorded} />
+      <PathList document={detail.document} local={local} onDismissNotRecorded={bench.dismissNotRecorded} stepExtras={photosOf} />
       <Heading level={3}>Cautions for this procedure</Heading>
       <CautionList cautions={detail.document.cautions} testID="path-cautions" />
     </ScrollView>
@@ -63,7 +69,7 @@ export function DiagnosisScreen() {
 
   let body;
   if (detail.status !== 'open') {
-    body = <ClosedDiagnosis detail={detail} local={local} />;
+    body = <ClosedDiagnosis detail={detail} local={local} stepExtras={photosOf} />;
   } else if (!check) {
     body = <ErrorState title="This check is missing" error={new Error(`The procedure version has no check “${local.currentCheckId}”. Reload to see where the diagnosis stands.`)} onRetry={bench.retryLoad} />;
   } else {
@@ -84,6 +90,11 @@ export function DiagnosisScreen() {
             onSendNow={bench.sendNow}
             onShowPath={isWide ? null : () => setView('path')}
           />
+        }
+        footer={
+          lastRecorded?.state === 'recorded' && lastRecorded.seq !== null ? (
+            <StepPhotos diagnosisId={detail.id} stepId={lastRecorded.key} seq={lastRecorded.seq} of={titleOf(lastRecorded.checkId)} heading={`Photos of the last step: ${titleOf(lastRecorded.checkId)}`} />
+          ) : null
         }
       />
     );

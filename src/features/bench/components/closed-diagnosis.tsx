@@ -1,4 +1,5 @@
 import { useRouter } from 'expo-router';
+import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
 import type { DiagnosisDetail } from '@shared/api/diagnosis-types';
 import { Button } from '@/components/ui/button';
@@ -6,11 +7,11 @@ import { Card } from '@/components/ui/card';
 import { Heading, Text } from '@/components/ui/text';
 import { formatDateTime } from '@/lib/format';
 import { layout, space, useBreakpoints } from '@/lib/theme';
-import type { LocalDiagnosis } from '../offline/local-path';
+import type { LocalDiagnosis, PathStep } from '../offline/local-path';
 import { PathList } from './path-list';
 
 /** A concluded or abandoned diagnosis: the outcome, the way to the report, and the path that led there. */
-export function ClosedDiagnosis({ detail, local }: { detail: DiagnosisDetail; local: LocalDiagnosis }) {
+export function ClosedDiagnosis({ detail, local, stepExtras }: { detail: DiagnosisDetail; local: LocalDiagnosis; stepExtras: (step: PathStep) => ReactNode }) {
   const router = useRouter();
   const { isWide } = useBreakpoints();
   const finding = detail.document.checks.find((c) => c.id === detail.conclusion?.findingCheckId);
@@ -39,7 +40,7 @@ export function ClosedDiagnosis({ detail, local }: { detail: DiagnosisDetail; lo
         </Card>
       )}
       <Heading level={2}>Path</Heading>
-      <PathList document={detail.document} local={local} />
+      <PathList document={detail.document} local={local} stepExtras={stepExtras} />
     </ScrollView>
   );
 }

@@ -18,7 +18,7 @@ import { StepFrame } from './step-frame';
 import type { StepProps } from './step-props';
 
 /** The path reached a finding: the faulty part and the action, then parts, labour and a closing note to conclude. */
-export function FindingStep({ detail, local, check, number, onBack, status }: StepProps<FindingCheck>) {
+export function FindingStep({ detail, local, check, number, onBack, status, footer }: StepProps<FindingCheck>) {
   const conclude = useConcludeDiagnosis(detail.id);
   const requestKey = useRequestKey();
   const waiting = local.pendingCount;
@@ -71,6 +71,7 @@ export function FindingStep({ detail, local, check, number, onBack, status }: St
             <TextField name="labourMinutes" label="Labour, minutes" hint="Optional; the time spent on the diagnosis and repair" testID="conclude-labour" inputMode="numeric" />
             <TextField name="note" label="Closing note" hint="What you repaired and how you proved the fix" testID="conclude-note" multiline />
           </View>
+          {footer}
         </StepFrame>
       )}
     </Formik>

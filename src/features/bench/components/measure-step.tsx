@@ -25,7 +25,7 @@ import type { StepProps } from './step-props';
  * A measure check: the spec as a bar and in words, the reading as the meter shows it, and the verdict the
  * moment it parses, worked out on the phone with the same `decideStep` the server runs.
  */
-export function MeasureStep({ detail, local, check, number, onRecord, onBack, status }: StepProps<MeasureCheck>) {
+export function MeasureStep({ detail, local, check, number, onRecord, onBack, status, footer }: StepProps<MeasureCheck>) {
   const colors = useTheme();
   const [text, setText] = useState('');
   const [unit, setUnit] = useState(UNIT_CHIPS[check.quantity][0]);
@@ -127,13 +127,13 @@ export function MeasureStep({ detail, local, check, number, onRecord, onBack, st
         />
         <View style={styles.chips} role="group" aria-label="Unit">
           {UNIT_CHIPS[check.quantity].map((u) => (
-            <Button key={u} testID={`unit-${u}`} label={u} ariaLabel={`Unit ${u}`} selected={!ownUnit && unit === u} onPress={() => {
+            <Button key={u} testID={`unit-${u}`} label={u} ariaLabel={`${u} (unit)`} selected={!ownUnit && unit === u} onPress={() => {
               setUnit(u);
               if (ownUnit) setText(text.replace(/[^\d.,+\-−]+$/, '').trim());
             }} style={styles.chip} />
           ))}
           {check.quantity !== 'temperature' ? (
-            <Button testID="unit-OL" label={OVER_RANGE} ariaLabel="Over range (OL)" selected={text.trim().toUpperCase() === OVER_RANGE} onPress={() => setText(OVER_RANGE)} style={styles.chip} />
+            <Button testID="unit-OL" label={OVER_RANGE} ariaLabel="OL (over range)" selected={text.trim().toUpperCase() === OVER_RANGE} onPress={() => setText(OVER_RANGE)} style={styles.chip} />
           ) : null}
         </View>
       </View>
@@ -148,6 +148,7 @@ export function MeasureStep({ detail, local, check, number, onRecord, onBack, st
       {decision && !decision.ok ? <FormError testID="reading-error" message={decision.message} /> : null}
 
       <NoteField value={note} onChange={setNote} />
+      {footer}
     </StepFrame>
   );
 }

@@ -11,7 +11,7 @@ import { StepFrame } from './step-frame';
 import type { StepProps } from './step-props';
 
 /** An observe check: each stated observation is one large button, in thumb reach; a tap records it. */
-export function ObserveStep({ check, number, onRecord, onBack, status }: StepProps<ObserveCheck>) {
+export function ObserveStep({ check, number, onRecord, onBack, status, footer }: StepProps<ObserveCheck>) {
   const [note, setNote] = useState('');
   return (
     <StepFrame
@@ -33,6 +33,7 @@ export function ObserveStep({ check, number, onRecord, onBack, status }: StepPro
       {status}
       <CheckDetails check={check} number={number} />
       <NoteField value={note} onChange={setNote} />
+      {footer}
     </StepFrame>
   );
 }

@@ -16,4 +16,6 @@ export interface StepProps<C extends Check = Check> {
   onBack: (() => void) | null;
   /** Shown above the check: where sending stands. */
   status: ReactNode;
+  /** Shown below the check: photos of the step just recorded. */
+  footer: ReactNode;
 }

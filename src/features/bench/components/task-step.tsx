@@ -10,7 +10,7 @@ import { StepFrame } from './step-frame';
 import type { StepProps } from './step-props';
 
 /** A task: do it, say what you did if it matters, then one "Done". */
-export function TaskStep({ check, number, onRecord, onBack, status }: StepProps<TaskCheck>) {
+export function TaskStep({ check, number, onRecord, onBack, status, footer }: StepProps<TaskCheck>) {
   const [note, setNote] = useState('');
   return (
     <StepFrame
@@ -25,6 +25,7 @@ export function TaskStep({ check, number, onRecord, onBack, status }: StepProps<
       {status}
       <CheckDetails check={check} number={number} />
       <NoteField value={note} onChange={setNote} />
+      {footer}
     </StepFrame>
   );
 }
