@@ -42,13 +42,13 @@ export interface ProcedureLayout {
 }
 
 export const NODE_WIDTH = 184;
-export const LINE_HEIGHT = 18;
+export const LINE_HEIGHT = 19;
 const NODE_PADDING = 14;
-const CHARS_PER_LINE = 22;
+const CHARS_PER_LINE = 21;
 const MAX_LINES = 3;
 const LABEL_CHARS = 24;
-/** Rough width of one character of the 12-unit label font, to reserve room for labels on the arrows. */
-const LABEL_CHAR_WIDTH = 6.6;
+/** Rough width of one character of the 13-unit label font, to reserve room for labels on the arrows. */
+const LABEL_CHAR_WIDTH = 7.2;
 
 /** Verdicts as short arrow labels. */
 const ARROW_WORDS: Record<Verdict, string> = { in_spec: 'in spec', low: 'low', high: 'high', open: 'open', marginal: 'marginal', no_reading: 'no reading' };
@@ -99,7 +99,7 @@ function outgoing(check: Check): { to: string; labels: string[] }[] {
 
 export function layoutProcedure(document: ProcedureDocument): ProcedureLayout {
   const g = new dagre.graphlib.Graph({ multigraph: false });
-  g.setGraph({ rankdir: 'TB', nodesep: 28, edgesep: 12, ranksep: 44, marginx: 16, marginy: 16 });
+  g.setGraph({ rankdir: 'TB', nodesep: 28, edgesep: 12, ranksep: 44, marginx: 16, marginy: 40 });
   g.setDefaultEdgeLabel(() => ({}));
   const ids = new Set(document.checks.map((c) => c.id));
   const wrapped = new Map<string, string[]>();

@@ -76,6 +76,7 @@ describe('an apprentice on a phone', () => {
           if (i === 4) await shot(page, 'phone', 'practice-verdict-revealed', page.getByTestId('replay-spec-bar'));
         }
       }
+      if (i === 1) await shot(page, 'phone', 'practice-second-step');
       if (i === 2) {
         await page.getByTestId('replay-diagram-toggle').click();
         await page.getByTestId('procedure-diagram').waitFor();
@@ -143,6 +144,8 @@ describe('a lead at a desk', () => {
     await page.getByTestId('replay-finding').waitFor();
     expect(await text(page, 'replay-finding')).toContain('Stator');
     await shot(page, 'desk', 'replay-finding');
+    await page.getByTestId('diagram-whole').click();
+    await shot(page, 'desk', 'replay-finding-whole-diagram');
 
     // The apprentice sees the comment on that step.
     const apprentice = await apiAs(server.url, demo('apprentice').email, DEMO_PASSWORD);

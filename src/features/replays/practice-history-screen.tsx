@@ -113,7 +113,11 @@ function RunTitle({ run }: { run: PracticeRun }) {
 }
 
 function Score({ run }: { run: PracticeRun }) {
-  return <Text variant="title" style={styles.score}>{`${run.right}/${run.answered}`}</Text>;
+  return (
+    <Text variant="title" style={styles.score} aria-label={`${run.right} of ${run.answered} right`}>
+      {`${run.right}/${run.answered}`}
+    </Text>
+  );
 }
 
 const styles = StyleSheet.create({

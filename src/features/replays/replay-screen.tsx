@@ -1,7 +1,7 @@
 import Head from 'expo-router/head';
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useMemo, useRef, useState } from 'react';
-import { type LayoutChangeEvent, ScrollView, StyleSheet, View } from 'react-native';
+import { ScrollView, StyleSheet, View } from 'react-native';
 import type { DiagnosisDetail } from '@shared/api/diagnosis-types';
 import type { PracticeResult, StepCommentView } from '@shared/api/replay-types';
 import { practiceQuestions } from '@shared/practice/questions';
@@ -77,7 +77,6 @@ function ReplayViewer({ diagnosis, comments, practice, onMode }: ViewerProps) {
   const [results, setResults] = useState<Record<number, PracticeResult>>({});
   const [answerError, setAnswerError] = useState<string | null>(null);
   const [diagramOpen, setDiagramOpen] = useState(false);
-  const [diagramHeight, setDiagramHeight] = useState(0);
   const answer = useAnswerPractice();
 
   const { document, steps } = diagnosis;
@@ -118,7 +117,7 @@ function ReplayViewer({ diagnosis, comments, practice, onMode }: ViewerProps) {
   const path = replayPath(steps, atEnd ? steps.length - 1 : revealed ? index : index - 1);
   const currentId = step ? step.checkId : findingId;
   const visitedTitles = steps.filter((s) => !s.retracted).map((s) => checkOf(s.checkId)?.title ?? s.checkId);
-  const diagramView = (height: number) => (
+  const diagramView = (height?: number) => (
     <ProcedureDiagram
       layout={diagram}
       path={path}
@@ -140,8 +139,8 @@ function ReplayViewer({ diagnosis, comments, practice, onMode }: ViewerProps) {
       meterRanges={diagnosis.meter.ranges}
       nextTitle={checkOf(step.nextCheckId)?.title ?? null}
       revealed={revealed}
+      prompt={question ? <PracticePrompt question={question} result={result} onAnswer={(v) => void submit(v)} busy={answer.isMutating} error={answerError} /> : null}
     >
-      {question ? <PracticePrompt question={question} result={result} onAnswer={(v) => void submit(v)} busy={answer.isMutating} error={answerError} /> : null}
       {revealed ? (
         <StepComments diagnosisId={diagnosis.id} seq={step.seq} comments={comments.filter((c) => c.stepSeq === step.seq)} canComment={user.role === 'lead' || user.role === 'owner'} />
       ) : null}
@@ -159,8 +158,8 @@ function ReplayViewer({ diagnosis, comments, practice, onMode }: ViewerProps) {
     </FindingPanel>
   );
 
-  const header = <ReplayHeader diagnosis={diagnosis} practice={practice} onMode={onMode} onBack={() => router.navigate('/replays')} />;
-  const nav = <StepNav index={index} total={steps.length + 1} canGoOn={revealed} onGo={go} waiting={!revealed} />;
+  const header = <ReplayHeader diagnosis={diagnosis} practice={practice} onMode={onMode} onBack={() => router.navigate('/replays')} compact={!isDesk && index > 0} />;
+  const nav = <StepNav index={index} steps={steps.length} waiting={!revealed} onGo={go} />;
 
   if (isDesk) {
     return (
@@ -178,9 +177,7 @@ function ReplayViewer({ diagnosis, comments, practice, onMode }: ViewerProps) {
           <Text variant="label" tone="textMuted">
             PROCEDURE DIAGRAM
           </Text>
-          <View style={styles.fill} onLayout={(e: LayoutChangeEvent) => setDiagramHeight(e.nativeEvent.layout.height - 72)}>
-            {diagramHeight > 0 ? diagramView(diagramHeight) : null}
-          </View>
+          {diagramView()}
         </View>
       </View>
     );
@@ -196,7 +193,6 @@ function ReplayViewer({ diagnosis, comments, practice, onMode }: ViewerProps) {
             <Button
               testID="replay-diagram-toggle"
               label={diagramOpen ? 'Hide the procedure diagram' : 'Show the procedure diagram'}
-              ariaLabel={diagramOpen ? 'Hide the procedure diagram' : 'Show the procedure diagram'}
               icon="procedures"
               selected={diagramOpen}
               onPress={() => setDiagramOpen((o) => !o)}
@@ -212,27 +208,31 @@ function ReplayViewer({ diagnosis, comments, practice, onMode }: ViewerProps) {
 
 interface StepNavProps {
   index: number;
-  total: number;
-  canGoOn: boolean;
+  /** Steps on the path; one more frame follows them: the finding. */
+  steps: number;
+  /** A practice question is open: Next waits for the answer. */
   waiting: boolean;
   onGo: (index: number) => void;
 }
 
 /** Previous and Next in thumb reach, always at the bottom of the screen. */
-function StepNav({ index, total, canGoOn, waiting, onGo }: StepNavProps) {
+function StepNav({ index, steps, waiting, onGo }: StepNavProps) {
   const colors = useTheme();
-  const last = index === total - 1;
+  const end = index === steps;
   return (
     <View style={[styles.nav, { borderTopColor: colors.border, backgroundColor: colors.surface }]} role="navigation" aria-label="Steps">
       <Button testID="replay-previous" label="Previous" icon="back" disabled={index === 0} onPress={() => onGo(index - 1)} style={styles.navButton} />
-      <Text variant="bodyStrong" tone="textMuted" style={styles.navCount} testID="replay-count">
-        {waiting ? 'Answer first' : `${index + 1} / ${total}`}
-      </Text>
+      <View style={styles.navCount} testID="replay-count">
+        <Text variant="label" tone="textMuted">
+          {end ? 'THE END' : 'STEP'}
+        </Text>
+        <Text variant="bodyStrong">{end ? 'Finding' : `${index + 1} of ${steps}`}</Text>
+      </View>
       <Button
         testID="replay-next"
-        label={index === total - 2 ? 'To the finding' : 'Next step'}
+        label={waiting ? 'Answer first' : index === steps - 1 ? 'To the finding' : 'Next step'}
         variant="primary"
-        disabled={last || !canGoOn}
+        disabled={end || waiting}
         onPress={() => onGo(index + 1)}
         style={styles.navButton}
       />
@@ -251,5 +251,5 @@ const styles = StyleSheet.create({
   diagramSection: { borderTopWidth: 1, paddingTop: space.lg, gap: space.md },
   nav: { flexDirection: 'row', alignItems: 'center', gap: space.md, paddingHorizontal: space.lg, paddingVertical: space.sm, borderTopWidth: 1 },
   navButton: { flex: 1, minHeight: 56 },
-  navCount: { minWidth: 84, textAlign: 'center' },
+  navCount: { minWidth: 64, alignItems: 'center' },
 });

@@ -16,11 +16,11 @@ describe('wrapTitle', () => {
     const lines = wrapTitle('Charging voltage at the battery with the headlight on and the engine at four thousand rpm');
     expect(lines).toHaveLength(3);
     expect(lines[2].endsWith('…')).toBe(true);
-    expect(lines.every((l) => l.length <= 22)).toBe(true);
+    expect(lines.every((l) => l.length <= 21)).toBe(true);
   });
 
   it('clips a single word longer than a line', () => {
-    expect(wrapTitle('Supercalifragilisticexpialidocious')).toEqual(['Supercalifragilistice…']);
+    expect(wrapTitle('Supercalifragilisticexpialidocious')).toEqual(['Supercalifragilistic…']);
   });
 });
 

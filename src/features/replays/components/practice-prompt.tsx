@@ -20,7 +20,6 @@ interface PracticePromptProps {
 /** Asks before the step is revealed; after the answer, says right or wrong and why, in the engine's words. */
 export function PracticePrompt({ question, result, onAnswer, busy, error }: PracticePromptProps) {
   const c = useTheme();
-  const answered = result?.attempt.answer ?? null;
   const [sending, setSending] = useState<string | null>(null);
   return (
     <View testID="practice-prompt" style={[styles.box, { borderColor: c.signal, backgroundColor: c.surface }]}>
@@ -35,31 +34,59 @@ export function PracticePrompt({ question, result, onAnswer, busy, error }: Prac
           </Text>
         )}
       </View>
-      <View style={styles.choices} role="group" aria-label={question.prompt}>
-        {question.choices.map((choice) => {
-          const picked = answered === choice.value;
-          const right = result !== null && result.attempt.expected === choice.value;
-          return (
+      {result ? (
+        <Answered question={question} result={result} />
+      ) : (
+        <View style={styles.choices} role="group" aria-label={question.prompt}>
+          {question.choices.map((choice) => (
             <Button
               key={choice.value}
               testID={`practice-choice-${choice.value}`}
               label={choice.label}
-              ariaLabel={result ? `${choice.label}${right ? ', the right answer' : ''}${picked ? ', your answer' : ''}` : choice.label}
-              icon={right ? 'check' : picked ? 'alert' : undefined}
-              selected={picked}
-              disabled={result !== null || busy}
+              disabled={busy}
               loading={busy && sending === choice.value}
               onPress={() => {
                 setSending(choice.value);
                 onAnswer(choice.value);
               }}
-              style={[styles.choice, right ? { borderColor: c.success, borderWidth: 3 } : null]}
+              style={styles.choice}
             />
-          );
-        })}
-      </View>
+          ))}
+        </View>
+      )}
       <FormError message={error} testID="practice-error" />
       {result ? <Outcome result={result} /> : null}
+    </View>
+  );
+}
+
+/** The choices once answered: which was yours and which was right, in words and marks as well as colour. */
+function Answered({ question, result }: { question: PracticeQuestion; result: PracticeResult }) {
+  const c = useTheme();
+  return (
+    <View role="list" style={styles.choices} testID="practice-answered">
+      {question.choices.map((choice) => {
+        const right = result.attempt.expected === choice.value;
+        const mine = result.attempt.answer === choice.value;
+        const tag = right && mine ? 'Your answer, right' : right ? 'Right answer' : mine ? 'Your answer' : null;
+        return (
+          <View
+            key={choice.value}
+            role="listitem"
+            style={[styles.answered, { borderColor: right ? c.success : mine ? c.danger : c.border, borderWidth: right || mine ? 3 : 1 }]}
+          >
+            {right || mine ? <Icon name={right ? 'check' : 'alert'} color={right ? c.success : c.danger} /> : <View style={styles.iconSpace} />}
+            <Text variant={right || mine ? 'bodyStrong' : 'body'} tone={right || mine ? 'text' : 'textMuted'} style={styles.grow}>
+              {choice.label}
+            </Text>
+            {tag ? (
+              <Text variant="label" tone="text">
+                {tag.toUpperCase()}
+              </Text>
+            ) : null}
+          </View>
+        );
+      })}
     </View>
   );
 }
@@ -86,6 +113,9 @@ const styles = StyleSheet.create({
   head: { gap: space.xs },
   choices: { gap: space.sm },
   choice: { justifyContent: 'flex-start', minHeight: 52 },
+  answered: { flexDirection: 'row', alignItems: 'center', gap: space.sm, minHeight: 52, borderRadius: radius.md, paddingHorizontal: space.md, paddingVertical: space.sm },
+  iconSpace: { width: 24 },
+  grow: { flex: 1 },
   outcome: { borderLeftWidth: 5, borderRadius: radius.md, padding: space.md, gap: space.sm },
   outcomeHead: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
 });

@@ -2,6 +2,7 @@ import { useEffect, useMemo, useRef, useState } from 'react';
 import { type LayoutChangeEvent, ScrollView, StyleSheet, View } from 'react-native';
 import Svg, { G, Path, Rect, Text as SvgText } from 'react-native-svg';
 import type { CheckKind } from '@shared/engine/procedure';
+import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
 import { edgeKey, type ReplayPath } from '@/features/replays/replay-path';
 import { type DiagramEdge, type DiagramNode, LINE_HEIGHT, type ProcedureLayout } from '@/lib/procedure-layout';
@@ -14,12 +15,14 @@ interface ProcedureDiagramProps {
   currentId: string | null;
   /** Label of the current check's tag, e.g. "Step 3". */
   currentTag: string;
-  height: number;
+  /** Height of the scrolling view; without it the diagram fills its parent. */
+  height?: number;
   /** Screen-reader summary of where the path went. */
   summary: string;
 }
 
-const SCALE = 0.85;
+/** Close up: node titles at about 13 px. */
+const CLOSE_UP = 0.85;
 
 /**
  * The procedure as a picture: checks as shapes by kind, outcomes as labelled arrows, the path taken drawn
@@ -31,15 +34,20 @@ export function ProcedureDiagram({ layout, path, currentId, currentTag, height, 
   const outer = useRef<ScrollView>(null);
   const inner = useRef<ScrollView>(null);
   const [viewportWidth, setViewportWidth] = useState(0);
+  const [viewportHeight, setViewportHeight] = useState(height ?? 0);
+  const [whole, setWhole] = useState(false);
   const current = layout.nodes.find((n) => n.id === currentId) ?? null;
-  const width = layout.width * SCALE;
-  const drawnHeight = layout.height * SCALE;
+  const scale = whole && viewportWidth > 0 ? Math.min(CLOSE_UP, viewportWidth / layout.width) : CLOSE_UP;
 
+  // Glide from step to step, but jump straight there when the diagram first appears or changes size.
+  const placed = useRef(false);
   useEffect(() => {
     if (!current || viewportWidth === 0) return;
-    inner.current?.scrollTo({ x: Math.max(0, current.x * SCALE - viewportWidth / 2), animated: true });
-    outer.current?.scrollTo({ y: Math.max(0, current.y * SCALE - height / 2), animated: true });
-  }, [current, viewportWidth, height]);
+    const animated = placed.current && !whole;
+    inner.current?.scrollTo({ x: Math.max(0, current.x * scale - viewportWidth / 2), animated });
+    outer.current?.scrollTo({ y: Math.max(0, current.y * scale - viewportHeight / 2), animated });
+    placed.current = true;
+  }, [current, viewportWidth, viewportHeight, scale, whole]);
 
   // Path arrows go on top of the rest so a crossing never hides them.
   const edges = useMemo(() => {
@@ -48,17 +56,21 @@ export function ProcedureDiagram({ layout, path, currentId, currentTag, height, 
   }, [layout.edges, path]);
 
   return (
-    <View style={styles.frame}>
+    <View style={[styles.frame, height === undefined && styles.fill]}>
+      <View style={styles.zoom} role="group" aria-label="Diagram size">
+        <Button testID="diagram-close-up" label="Close up" selected={!whole} onPress={() => setWhole(false)} />
+        <Button testID="diagram-whole" label="Whole procedure" selected={whole} onPress={() => setWhole(true)} />
+      </View>
       <View
         testID="procedure-diagram"
         role="img"
         aria-label={summary}
-        onLayout={(e: LayoutChangeEvent) => setViewportWidth(e.nativeEvent.layout.width)}
-        style={[styles.viewport, { height, borderColor: c.border, backgroundColor: c.surfaceSunken }]}
+        onLayout={(e: LayoutChangeEvent) => setViewportHeight(e.nativeEvent.layout.height)}
+        style={[styles.viewport, height === undefined ? styles.fill : { height }, { borderColor: c.border, backgroundColor: c.surfaceSunken }]}
       >
         <ScrollView ref={outer} nestedScrollEnabled>
-          <ScrollView ref={inner} horizontal nestedScrollEnabled>
-            <Svg width={width} height={drawnHeight} viewBox={`0 0 ${layout.width} ${layout.height}`} aria-hidden>
+          <ScrollView ref={inner} horizontal nestedScrollEnabled onLayout={(e: LayoutChangeEvent) => setViewportWidth(e.nativeEvent.layout.width)}>
+            <Svg width={layout.width * scale} height={layout.height * scale} viewBox={`0 0 ${layout.width} ${layout.height}`} aria-hidden>
               {edges.map((e) => (
                 <Arrow key={edgeKey(e.from, e.to)} edge={e} state={path.taken.has(edgeKey(e.from, e.to)) ? 'taken' : path.detours.has(edgeKey(e.from, e.to)) ? 'detour' : 'idle'} c={c} />
               ))}
@@ -70,6 +82,11 @@ export function ProcedureDiagram({ layout, path, currentId, currentTag, height, 
           </ScrollView>
         </ScrollView>
       </View>
+      {whole ? null : (
+        <Text variant="small" tone="textMuted">
+          Scroll the diagram to see the rest of the procedure.
+        </Text>
+      )}
       <Legend c={c} />
     </View>
   );
@@ -85,15 +102,15 @@ function Arrow({ edge, state, c }: { edge: DiagramEdge; state: 'taken' | 'detour
   const angle = Math.atan2(b.y - a.y, b.x - a.x);
   const size = state === 'idle' ? 8 : 12;
   const head = [angle + Math.PI * 0.85, angle - Math.PI * 0.85].map((t) => `${(b.x + size * Math.cos(t)).toFixed(1)} ${(b.y + size * Math.sin(t)).toFixed(1)}`);
-  const labelWidth = edge.label.length * 6.6 + 8;
+  const labelWidth = edge.label.length * 7.2 + 8;
   return (
     <G>
       <Path d={d} stroke={stroke} strokeWidth={widthOf} fill="none" strokeDasharray={state === 'detour' ? '8 6' : undefined} strokeLinejoin="round" />
       <Path d={`M${b.x} ${b.y}L${head[0]}L${head[1]}Z`} fill={stroke} />
       {edge.labelAt && edge.label ? (
         <G>
-          <Rect x={edge.labelAt.x - labelWidth / 2} y={edge.labelAt.y - 9} width={labelWidth} height={18} rx={4} fill={c.surfaceSunken} />
-          <SvgText x={edge.labelAt.x} y={edge.labelAt.y + 4} fontSize={12} fontFamily={state === 'idle' ? fonts.regular : fonts.bold} fill={state === 'idle' ? c.textMuted : c.text} textAnchor="middle">
+          <Rect x={edge.labelAt.x - labelWidth / 2} y={edge.labelAt.y - 10} width={labelWidth} height={20} rx={4} fill={c.surfaceSunken} />
+          <SvgText x={edge.labelAt.x} y={edge.labelAt.y + 4.5} fontSize={13} fontFamily={state === 'idle' ? fonts.regular : fonts.bold} fill={state === 'idle' ? c.textMuted : c.text} textAnchor="middle">
             {edge.label}
           </SvgText>
         </G>
@@ -128,7 +145,7 @@ function roundedRect(l: number, t: number, w: number, h: number, rr: number): st
 }
 
 function Node({ node, visited, current, c }: { node: DiagramNode; visited: boolean; current: boolean; c: Palette }) {
-  const top = node.y - (node.lines.length * LINE_HEIGHT) / 2 + 13;
+  const top = node.y - (node.lines.length * LINE_HEIGHT) / 2 + 14;
   return (
     <G>
       {current ? <Path d={shapePath(node.kind, node.x, node.y, node.width + 14, node.height + 14)} fill="none" stroke={c.signal} strokeWidth={5} /> : null}
@@ -143,7 +160,7 @@ function Node({ node, visited, current, c }: { node: DiagramNode; visited: boole
       ) : null}
       {node.kind === 'task' ? <Rect x={node.x - node.width / 2} y={node.y - node.height / 2} width={8} height={node.height} fill={visited ? c.primary : c.borderStrong} /> : null}
       {node.lines.map((line, i) => (
-        <SvgText key={i} x={node.x} y={top + i * LINE_HEIGHT} fontSize={14} fontFamily={visited ? fonts.semiBold : fonts.regular} fill={c.text} textAnchor="middle">
+        <SvgText key={i} x={node.x} y={top + i * LINE_HEIGHT} fontSize={15} fontFamily={visited ? fonts.semiBold : fonts.regular} fill={c.text} textAnchor="middle">
           {line}
         </SvgText>
       ))}
@@ -207,6 +224,8 @@ function Legend({ c }: { c: Palette }) {
 
 const styles = StyleSheet.create({
   frame: { gap: space.sm },
+  fill: { flex: 1 },
+  zoom: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   viewport: { borderWidth: 1, borderRadius: radius.md, overflow: 'hidden' },
   legend: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, rowGap: space.xs },
   legendItem: { flexDirection: 'row', alignItems: 'center', gap: space.xs },

@@ -30,12 +30,12 @@ export function ReplayFilterBar({ filters, options, onChange }: FilterBarProps) 
             key={key}
             testID={`filter-${key}`}
             label={`${CHOICE_LABELS[key]}: ${filters[key] ?? 'Any'}`}
-            ariaLabel={`${CHOICE_LABELS[key]} filter: ${filters[key] ?? 'Any'}. ${open === key ? 'Close' : 'Open'} its choices`}
+            ariaLabel={`${CHOICE_LABELS[key]}: ${filters[key] ?? 'Any'}, ${open === key ? 'close' : 'open'} the choices`}
             selected={open === key || filters[key] !== null}
             onPress={() => toggle(key)}
           />
         ))}
-        <Button testID="filter-dates" label={`Concluded: ${dates}`} ariaLabel={`Date filter: ${dates}`} selected={open === 'dates' || dates !== 'Any time'} onPress={() => toggle('dates')} />
+        <Button testID="filter-dates" label={`Concluded: ${dates}`} ariaLabel={`Concluded: ${dates}, ${open === 'dates' ? 'close' : 'open'} the date choices`} selected={open === 'dates' || dates !== 'Any time'} onPress={() => toggle('dates')} />
         {any ? <Button testID="filter-clear" label="Clear filters" variant="quiet" onPress={() => onChange(NO_FILTERS)} /> : null}
       </View>
       {open && open !== 'dates' ? (

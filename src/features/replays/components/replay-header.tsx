@@ -11,10 +11,25 @@ interface ReplayHeaderProps {
   practice: boolean;
   onMode: (practice: boolean) => void;
   onBack: () => void;
+  /** Title and machine only: on a phone past the first step, so the step itself starts near the top. */
+  compact?: boolean;
 }
 
 /** What is being replayed, and the switch between watching and practising. */
-export function ReplayHeader({ diagnosis: d, practice, onMode, onBack }: ReplayHeaderProps) {
+export function ReplayHeader({ diagnosis: d, practice, onMode, onBack, compact = false }: ReplayHeaderProps) {
+  if (compact) {
+    return (
+      <View style={styles.header}>
+        <Button testID="replay-back" label="All replays" icon="back" variant="quiet" onPress={onBack} style={styles.back} />
+        <View style={styles.titles}>
+          <Text variant="bodyStrong" testID="replay-title">
+            {d.procedureTitle}
+          </Text>
+          <Text variant="small" tone="textMuted">{`${d.machine}${practice ? ' · practice' : ''}`}</Text>
+        </View>
+      </View>
+    );
+  }
   const detours = d.steps.filter((s) => s.retracted).length;
   const took = d.endedAt ? formatDuration(Date.parse(d.endedAt) - Date.parse(d.startedAt)) : null;
   const facts = [

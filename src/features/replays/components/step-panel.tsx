@@ -31,12 +31,14 @@ interface StepPanelProps {
   nextTitle: string | null;
   /** False while a practice question hides the outcome: the verdict, the note and where it led. */
   revealed: boolean;
-  /** The practice question or result, and the comments, placed after the reading. */
+  /** The practice question, right under the reading so the reveal appears below it rather than pushing it away. */
+  prompt?: ReactNode;
+  /** The comments, at the end. */
   children?: ReactNode;
 }
 
 /** One step of a replay: the check's instructions and probe points, the reading against its spec, the verdict and the note. */
-export function StepPanel({ step, check, position, total, spentMs, earlier, meterRanges, nextTitle, revealed, children }: StepPanelProps) {
+export function StepPanel({ step, check, position, total, spentMs, earlier, meterRanges, nextTitle, revealed, prompt, children }: StepPanelProps) {
   const c = useTheme();
   return (
     <View style={styles.panel} testID={`replay-step-${step.seq}`}>
@@ -76,6 +78,10 @@ export function StepPanel({ step, check, position, total, spentMs, earlier, mete
         <Fact label="Done">
           <Text variant="bodyStrong">Marked done by {step.by}.</Text>
         </Fact>
+      ) : null}
+      {prompt}
+      {revealed && check.kind === 'measure' && step.evaluation && step.verdict ? (
+        <VerdictPanel verdict={step.verdict} explanation={explainEvaluation(check.spec, step.evaluation, check.quantity)} testID="replay-verdict" />
       ) : null}
       {revealed && step.note ? (
         <View style={[styles.note, { borderLeftColor: c.primary, backgroundColor: c.surfaceSunken }]} testID="replay-note">
@@ -137,9 +143,9 @@ interface ReadingProps {
   revealed: boolean;
 }
 
-/** The reading as typed, in big numerals, against the spec bar; the marker and the verdict once revealed. */
+/** The reading as typed, in big numerals, against the spec bar; the marker once revealed. */
 function Reading({ step, check, earlier, meterRanges, revealed }: ReadingProps) {
-  const parsed = step.overRange ? 'OL: over range' : step.valueSi === null ? 'No reading' : formatValue(step.valueSi, check.quantity);
+  const parsed = step.overRange ? 'OL: over range' : step.valueSi === null ? 'No reading' : asParsed(step.valueSi, check);
   const evaluation = step.evaluation;
   // Before the answer the bar shows the window alone, as the check screen does before a reading.
   const shown = evaluation && !revealed ? { ...evaluation, verdict: 'no_reading' as const, leans: null, compared: null, interval: null, uncertainty: 0 } : evaluation;
@@ -150,11 +156,13 @@ function Reading({ step, check, earlier, meterRanges, revealed }: ReadingProps) 
         <Text variant="small" tone="textMuted">{`Read as ${parsed}`}</Text>
       </Fact>
       {shown ? <SpecBar spec={check.spec} quantity={check.quantity} evaluation={shown} uncertaintyAt={checkUncertainty(check, meterRanges, earlier)} testID="replay-spec-bar" /> : null}
-      {revealed && evaluation && step.verdict ? (
-        <VerdictPanel verdict={step.verdict} explanation={explainEvaluation(check.spec, evaluation, check.quantity)} testID="replay-verdict" />
-      ) : null}
     </View>
   );
+}
+
+/** The parsed value with the digits a meter shows (up to four), trailing zeros dropped: 12.64 V, 428 Ω, 4.1 Ω. */
+function asParsed(value: number, check: MeasureCheck): string {
+  return formatValue(value, check.quantity, { significant: 4 }).replace(/(\.\d*?)0+ /, '$1 ').replace('. ', ' ');
 }
 
 function Fact({ label, children, testID }: { label: string; children: ReactNode; testID?: string }) {
