@@ -102,8 +102,15 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     // One check at a time.
     await checkIs(page, 'Spark at both plug leads');
     await shot(page, size, 'bench-check-observe');
+    await expectAccessible(page, 'observe check');
     await page.getByTestId('choice-none').click();
     await checkIs(page, 'Battery voltage at rest');
+    // A reading that can't be what this check measures is refused in words, and nothing can be recorded.
+    await read(page, '12.6 mA');
+    await page.getByTestId('reading-error').waitFor();
+    expect(await page.getByTestId('reading-error').textContent()).toMatch(/volt/i);
+    expect(await page.getByTestId('record-reading').getAttribute('aria-disabled')).toBe('true');
+    await shot(page, size, 'bench-check-unreadable', page.getByTestId('reading-error'));
     await read(page, '12.6');
     expect(await page.getByTestId('verdict-word').textContent()).toBe('In spec');
     await record(page, 'Switched supply at the CDI');

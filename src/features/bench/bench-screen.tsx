@@ -66,7 +66,6 @@ export function BenchScreen() {
         icon="bench"
         title="Nothing on the bench yet"
         body="When a machine comes in, start a diagnosis from a published procedure. Open ones wait here to be picked up again, on this phone or any other."
-        action={{ label: 'Start a diagnosis', onPress: start, testID: 'bench-empty-start' }}
       />
     );
   } else {

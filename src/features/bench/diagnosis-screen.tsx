@@ -55,11 +55,16 @@ export function DiagnosisScreen() {
   const liveSteps = local.steps.filter((s) => !s.retracted).length;
   const check = detail.document.checks.find((c) => c.id === local.currentCheckId);
   const titleOf = (checkId: string) => detail.document.checks.find((c) => c.id === checkId)?.title ?? checkId;
-  const photosOf = (step: PathStep) =>
-    step.state === 'recorded' && step.seq !== null && !step.retracted ? <StepPhotos diagnosisId={detail.id} stepId={step.key} seq={step.seq} of={titleOf(step.checkId)} /> : null;
   const lastRecorded = [...local.steps].reverse().find((s) => !s.retracted);
+  // Every recorded step shows its photos. The latest one, still at hand, takes new ones below the check;
+  // on a phone also in the path, which replaces the check there.
+  const photosOf = (step: PathStep) =>
+    step.state === 'recorded' && step.seq !== null && !step.retracted ? (
+      <StepPhotos diagnosisId={detail.id} stepId={step.key} name={String(step.seq)} of={titleOf(step.checkId)} canAdd={!isWide && detail.status === 'open' && step === lastRecorded} />
+    ) : null;
   const path = (
-    <ScrollView contentContainerStyle={styles.pathContent} testID="path-panel">
+    // Focusable, so a keyboard can scroll the path even before it holds a button.
+    <ScrollView contentContainerStyle={styles.pathContent} testID="path-panel" tabIndex={0} aria-label="Path and cautions">
       <Heading level={2}>Path</Heading>
       <PathList document={detail.document} local={local} onDismissNotRecorded={bench.dismissNotRecorded} stepExtras={photosOf} />
       <Heading level={3}>Cautions for this procedure</Heading>
@@ -93,7 +98,14 @@ export function DiagnosisScreen() {
         }
         footer={
           lastRecorded?.state === 'recorded' && lastRecorded.seq !== null ? (
-            <StepPhotos diagnosisId={detail.id} stepId={lastRecorded.key} seq={lastRecorded.seq} of={titleOf(lastRecorded.checkId)} heading={`Photos of the last step: ${titleOf(lastRecorded.checkId)}`} />
+            <StepPhotos
+              diagnosisId={detail.id}
+              stepId={lastRecorded.key}
+              name={String(lastRecorded.seq)}
+              of={titleOf(lastRecorded.checkId)}
+              heading={`Photos of the last step: ${titleOf(lastRecorded.checkId)}`}
+              canAdd
+            />
           ) : null
         }
       />

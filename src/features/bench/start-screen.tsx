@@ -10,7 +10,7 @@ import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { DIAGNOSIS_LISTS, diagnosisKey, useStartDiagnosis } from '@/hooks/use-diagnosis';
 import { useRequestKey } from '@/lib/idempotency-key';
-import { space } from '@/lib/theme';
+import { layout, space } from '@/lib/theme';
 import { BeforeFirstCheck } from './start/before-first-check';
 import { JobPicker } from './start/job-picker';
 import { keepLastStart } from './start/last-used';
@@ -112,9 +112,9 @@ export function StartScreen() {
 
       <View style={styles.back}>
         {previous ? (
-          <Button testID="start-back" icon="back" variant="quiet" label={`Back to ${STAGES.find((s) => s.stage === previous)!.title.toLowerCase()}`} onPress={() => setStage(previous)} />
+          <Button testID="start-back" icon="back" variant="quiet" label={`Back to ${STAGES.find((s) => s.stage === previous)!.title.toLowerCase()}`} onPress={() => setStage(previous)} style={styles.tall} />
         ) : (
-          <Button testID="start-cancel" icon="back" variant="quiet" label="Back to my bench" onPress={() => router.navigate('/bench')} />
+          <Button testID="start-cancel" icon="back" variant="quiet" label="Back to my bench" onPress={() => router.navigate('/bench')} style={styles.tall} />
         )}
       </View>
     </Screen>
@@ -123,4 +123,5 @@ export function StartScreen() {
 
 const styles = StyleSheet.create({
   back: { alignItems: 'flex-start', gap: space.sm },
+  tall: { minHeight: layout.primaryTouch },
 });

@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
 import { Text } from '@/components/ui/text';
-import { space, useTheme } from '@/lib/theme';
+import { layout, space, useTheme } from '@/lib/theme';
 
 /** Above every page while the session check can't reach the server: the shop stays open from this device. */
 export function OfflineBanner({ onRetry }: { onRetry: () => void }) {
@@ -13,7 +13,7 @@ export function OfflineBanner({ onRetry }: { onRetry: () => void }) {
       <Text variant="small" style={styles.message}>
         Can't reach Probepath. Work carries on from this device.
       </Text>
-      <Button testID="session-retry" label="Try again" variant="quiet" onPress={onRetry} />
+      <Button testID="session-retry" label="Try again" variant="quiet" onPress={onRetry} style={{ minHeight: layout.primaryTouch }} />
     </View>
   );
 }

@@ -1,4 +1,5 @@
 import { Button } from '@/components/ui/button';
+import { layout } from '@/lib/theme';
 
 /** Takes back the last step: it stays on the path, struck through, and its check comes back. */
 export function BackButton({ onBack }: { onBack: (() => void) | null }) {
@@ -10,6 +11,7 @@ export function BackButton({ onBack }: { onBack: (() => void) | null }) {
       ariaLabel="Back: take back the last step"
       disabled={!onBack}
       onPress={onBack ?? undefined}
+      style={{ minHeight: layout.primaryTouch }}
     />
   );
 }

@@ -9,6 +9,7 @@ import { formatDateTime } from '@/lib/format';
 import { layout, space, useBreakpoints } from '@/lib/theme';
 import type { LocalDiagnosis, PathStep } from '../offline/local-path';
 import { PathList } from './path-list';
+import { StepPhotos } from './step-photos';
 
 /** A concluded or abandoned diagnosis: the outcome, the way to the report, and the path that led there. */
 export function ClosedDiagnosis({ detail, local, stepExtras }: { detail: DiagnosisDetail; local: LocalDiagnosis; stepExtras: (step: PathStep) => ReactNode }) {
@@ -27,6 +28,7 @@ export function ClosedDiagnosis({ detail, local, stepExtras }: { detail: Diagnos
           {detail.conclusion.parts ? <Text>Parts: {detail.conclusion.parts}</Text> : null}
           {detail.conclusion.labourMinutes !== null ? <Text>Labour: {detail.conclusion.labourMinutes} min</Text> : null}
           {detail.conclusion.note ? <Text tone="textMuted">{detail.conclusion.note}</Text> : null}
+          <StepPhotos diagnosisId={detail.id} stepId={null} name="repair" of="the repair" heading="Photos of the repair" canAdd />
           <View style={styles.actions}>
             <Button testID="open-report" variant="primary" icon="report" label="Open the report" onPress={() => router.push(`/report/${detail.id}`)} style={styles.grow} />
             <Button testID="back-to-bench" icon="bench" label="My bench" onPress={() => router.navigate('/bench')} style={styles.grow} />
@@ -36,7 +38,7 @@ export function ClosedDiagnosis({ detail, local, stepExtras }: { detail: Diagnos
         <Card testID="abandoned">
           <Heading level={2}>Abandoned</Heading>
           <Text>{detail.abandonReason}</Text>
-          <Button testID="back-to-bench" icon="bench" label="My bench" onPress={() => router.navigate('/bench')} />
+          <Button testID="back-to-bench" icon="bench" label="My bench" onPress={() => router.navigate('/bench')} style={styles.grow} />
         </Card>
       )}
       <Heading level={2}>Path</Heading>
@@ -48,5 +50,5 @@ export function ClosedDiagnosis({ detail, local, stepExtras }: { detail: Diagnos
 const styles = StyleSheet.create({
   content: { gap: space.xl, maxWidth: layout.maxFormWidth + 200, width: '100%', alignSelf: 'center' },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
-  grow: { flexGrow: 1 },
+  grow: { flexGrow: 1, minHeight: layout.primaryTouch },
 });

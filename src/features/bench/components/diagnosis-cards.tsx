@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Heading, Text } from '@/components/ui/text';
 import { formatDateTime } from '@/lib/format';
-import { space } from '@/lib/theme';
+import { layout, space } from '@/lib/theme';
 
 /** An open diagnosis to pick up again: the machine, the complaint in the customer's words, how far it got. */
 export function OpenDiagnosisCard({ diagnosis: d, pending, onResume }: { diagnosis: DiagnosisSummary; pending: number; onResume: () => void }) {
@@ -61,7 +61,7 @@ export function ConcludedDiagnosisCard({ diagnosis: d, onOpen, onReport }: { dia
 const styles = StyleSheet.create({
   card: { flexGrow: 1, flexBasis: 320 },
   head: { flexDirection: 'row', alignItems: 'flex-start', gap: space.sm, flexWrap: 'wrap' },
-  grow: { flexGrow: 1, flexShrink: 1 },
+  grow: { flexGrow: 1, flexShrink: 1, minHeight: layout.primaryTouch },
   complaint: { fontStyle: 'italic' },
   finding: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
   actions: { flexDirection: 'row', gap: space.md },

@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import type { DiagnosisDetail } from '@shared/api/diagnosis-types';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
-import { space, useTheme } from '@/lib/theme';
+import { layout, space, useTheme } from '@/lib/theme';
 
 /** Which machine and procedure this is, and (on a phone) the switch between the check and the path. */
 export function DiagnosisHeader({ detail, steps, view, onToggle }: { detail: DiagnosisDetail; steps: number; view: 'check' | 'path'; onToggle: (() => void) | null }) {
@@ -25,6 +25,7 @@ export function DiagnosisHeader({ detail, steps, view, onToggle }: { detail: Dia
           ariaLabel={view === 'path' ? 'Back to the check' : `Path: ${steps} steps`}
           selected={view === 'path'}
           onPress={onToggle}
+          style={styles.toggle}
         />
       ) : null}
     </View>
@@ -34,4 +35,5 @@ export function DiagnosisHeader({ detail, steps, view, onToggle }: { detail: Dia
 const styles = StyleSheet.create({
   bar: { flexDirection: 'row', alignItems: 'center', gap: space.md, paddingHorizontal: space.lg, paddingVertical: space.sm, borderBottomWidth: 1 },
   titles: { flex: 1, gap: 2 },
+  toggle: { minHeight: layout.primaryTouch },
 });

@@ -6,7 +6,7 @@ import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { Heading, Text } from '@/components/ui/text';
 import { VerdictChip } from '@/components/verdict/verdict-mark';
-import { radius, space, useTheme } from '@/lib/theme';
+import { layout, radius, space, useTheme } from '@/lib/theme';
 import type { LocalDiagnosis, PathStep } from '../offline/local-path';
 
 /**
@@ -34,7 +34,7 @@ export function PathList({ document, local, onDismissNotRecorded, stepExtras }: 
           {local.notRecorded.map((step) => (
             <PathRow key={step.key} step={step} check={checks.get(step.checkId)} number={null} />
           ))}
-          {onDismissNotRecorded ? <Button testID="dismiss-not-recorded" label="I've seen these, clear them" onPress={onDismissNotRecorded} /> : null}
+          {onDismissNotRecorded ? <Button testID="dismiss-not-recorded" label="I've seen these, clear them" onPress={onDismissNotRecorded} style={styles.tall} /> : null}
         </View>
       ) : null}
     </View>
@@ -101,4 +101,5 @@ const styles = StyleSheet.create({
   facts: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm, paddingLeft: 30 },
   reading: { fontSize: 20, lineHeight: 26 },
   struck: { textDecorationLine: 'line-through' },
+  tall: { minHeight: layout.primaryTouch },
 });

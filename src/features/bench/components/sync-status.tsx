@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
 import { Text } from '@/components/ui/text';
-import { radius, space, useTheme } from '@/lib/theme';
+import { layout, radius, space, useTheme } from '@/lib/theme';
 
 /** Where sending stands: nothing when the server has everything. */
 export function SyncStatus({ pending, offline, notRecorded, onSendNow, onShowPath }: { pending: number; offline: boolean; notRecorded: number; onSendNow: () => void; onShowPath: (() => void) | null }) {
@@ -14,7 +14,7 @@ export function SyncStatus({ pending, offline, notRecorded, onSendNow, onShowPat
         <Text style={styles.text}>
           {notRecorded === 1 ? 'One step was' : `${notRecorded} steps were`} not recorded: the diagnosis changed on the server. What you typed is kept on the path.
         </Text>
-        {onShowPath ? <Button testID="sync-show-path" variant="quiet" label="See the path" onPress={onShowPath} /> : null}
+        {onShowPath ? <Button testID="sync-show-path" variant="quiet" label="See the path" onPress={onShowPath} style={styles.tall} /> : null}
       </View>
     );
   }
@@ -27,7 +27,7 @@ export function SyncStatus({ pending, offline, notRecorded, onSendNow, onShowPat
           ? `No signal. ${pending === 1 ? 'One step is' : `${pending} steps are`} saved on this phone and will be sent in order when the connection is back.`
           : `Sending ${pending === 1 ? 'one step' : `${pending} steps`}…`}
       </Text>
-      {offline ? <Button testID="sync-send-now" variant="quiet" label="Send now" onPress={onSendNow} /> : null}
+      {offline ? <Button testID="sync-send-now" variant="quiet" label="Send now" onPress={onSendNow} style={styles.tall} /> : null}
     </View>
   );
 }
@@ -35,4 +35,5 @@ export function SyncStatus({ pending, offline, notRecorded, onSendNow, onShowPat
 const styles = StyleSheet.create({
   box: { flexDirection: 'row', alignItems: 'center', flexWrap: 'wrap', gap: space.md, borderLeftWidth: 6, borderRadius: radius.md, padding: space.md },
   text: { flex: 1, minWidth: 200 },
+  tall: { minHeight: layout.primaryTouch },
 });

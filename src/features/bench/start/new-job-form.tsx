@@ -12,7 +12,7 @@ import { useCreateJob } from '@/hooks/use-jobs';
 import { useCreateMachine, useMachines } from '@/hooks/use-machines';
 import { showServerError } from '@/lib/form-errors';
 import { useRequestKey } from '@/lib/idempotency-key';
-import { radius, space, useTheme } from '@/lib/theme';
+import { layout, radius, space, useTheme } from '@/lib/theme';
 import { machineName } from './machine-name';
 import { VinCheck } from './vin-check';
 
@@ -110,7 +110,7 @@ export function NewJobForm({ onCreated, onCancel }: { onCreated: (job: JobView) 
             {values.machineMode === 'new' ? <NewMachineFields /> : <ExistingMachinePicker />}
           </Card>
           <View style={styles.actions}>
-            <Button testID="new-job-cancel" label="Back to jobs" icon="back" onPress={onCancel} />
+            <Button testID="new-job-cancel" label="Back to jobs" icon="back" onPress={onCancel} style={styles.segment} />
             <Button testID="new-job-submit" variant="primary" label="Open the job" loading={isSubmitting} onPress={() => void submitForm()} style={styles.grow} />
           </View>
         </View>
@@ -124,8 +124,8 @@ function MachineModePicker() {
   const choose = (mode: MachineMode) => void setFieldValue('machineMode', mode, false);
   return (
     <View style={styles.segments} role="group" aria-label="Machine">
-      <Button testID="machine-mode-new" label="New machine" selected={values.machineMode === 'new'} onPress={() => choose('new')} style={styles.grow} />
-      <Button testID="machine-mode-existing" label="Already in the shop" selected={values.machineMode === 'existing'} onPress={() => choose('existing')} style={styles.grow} />
+      <Button testID="machine-mode-new" label="New machine" selected={values.machineMode === 'new'} onPress={() => choose('new')} style={[styles.grow, styles.segment]} />
+      <Button testID="machine-mode-existing" label="Already in the shop" selected={values.machineMode === 'existing'} onPress={() => choose('existing')} style={[styles.grow, styles.segment]} />
     </View>
   );
 }
@@ -143,7 +143,7 @@ function NewMachineFields() {
       <TextField name="mileage" label="Mileage" hint="Optional" testID="machine-mileage" inputMode="numeric" />
       <View style={styles.segments} role="group" aria-label="Mileage unit">
         {MILEAGE_UNITS.map((unit) => (
-          <Button key={unit} testID={`machine-mileage-${unit}`} label={unit} selected={values.mileageUnit === unit} onPress={() => void setFieldValue('mileageUnit', unit, false)} />
+          <Button key={unit} testID={`machine-mileage-${unit}`} label={unit} selected={values.mileageUnit === unit} onPress={() => void setFieldValue('mileageUnit', unit, false)} style={styles.segment} />
         ))}
       </View>
     </View>
@@ -187,6 +187,7 @@ const styles = StyleSheet.create({
   form: { gap: space.lg },
   fields: { gap: space.md },
   segments: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
+  segment: { minHeight: layout.primaryTouch, minWidth: 64 },
   list: { borderWidth: 1, borderRadius: radius.md, overflow: 'hidden' },
   actions: { flexDirection: 'row', gap: space.md, flexWrap: 'wrap' },
   grow: { flexGrow: 1 },
