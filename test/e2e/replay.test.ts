@@ -1,8 +1,9 @@
+import fs from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DiagnosisDetail, DiagnosisSummary } from '@shared/api/diagnosis-types';
 import { practiceQuestions } from '@shared/practice/questions';
-import { apiAs, DEMO_PASSWORD, demo, launchBrowser, openPage, type RunningServer, shot, signIn, startServer } from './support';
+import { apiAs, DEMO_PASSWORD, demo, launchBrowser, openPage, type RunningServer, shot, signIn, SIZES, type Size, startServer } from './support';
 
 let server: RunningServer;
 let browser: Browser;
@@ -25,6 +26,19 @@ afterAll(async () => {
 });
 
 const text = async (page: Page, testID: string) => (await page.getByTestId(testID).first().textContent()) ?? '';
+
+const AXE = fs.readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8');
+
+/** Serious and critical WCAG violations axe-core finds on the page, one line each. */
+async function violations(page: Page): Promise<string[]> {
+  await page.addScriptTag({ content: AXE });
+  const found = await page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run(ctx: Document, opts: object): Promise<{ violations: { id: string; impact: string | null; nodes: { target: string[] }[] }[] }> } }).axe;
+    const result = await axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'] } });
+    return result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.id} at ${v.nodes.map((n) => n.target.join(' ')).slice(0, 3).join(', ')}`);
+  });
+  return found;
+}
 
 describe('an apprentice on a phone', () => {
   it('filters the replays, then practises a whole replay and is scored by the server', async () => {
@@ -106,6 +120,29 @@ describe('an apprentice on a phone', () => {
     await page.getByTestId(`replay-watch-${fellrunner.id}`).click();
     await page.getByTestId('replay-step-1').waitFor();
     await shot(page, 'phone', 'replay-dark');
+    await context.close();
+  });
+});
+
+describe.each(['phone', 'desk'] as Size[])('accessibility at %s size', (size) => {
+  it('has no serious violations in a replay, watching and practising', async () => {
+    // axe is injected as a script, which the app's Content-Security-Policy rightly refuses; this context bypasses it.
+    const context = await browser.newContext({ baseURL: server.url, viewport: SIZES[size], bypassCSP: true });
+    const page = await context.newPage();
+    await signIn(page, demo('apprentice').email, DEMO_PASSWORD, 'replays');
+    const fellrunner = await detail('Fellrunner');
+    for (const mode of ['watch', 'practice']) {
+      await page.goto(`/replays/${fellrunner.id}?mode=${mode}`);
+      await page.getByTestId('replay-step-1').waitFor();
+      if (mode === 'practice') await page.getByTestId('practice-prompt').waitFor();
+      else if (size === 'phone') await page.getByTestId('replay-diagram-toggle').click();
+      await page.getByTestId('procedure-diagram').or(page.getByTestId('practice-prompt')).first().waitFor();
+      await page.evaluate(() => document.fonts.ready);
+      expect(await violations(page), `${mode} mode`).toEqual([]);
+    }
+    await page.goto('/replays/practice');
+    await page.getByTestId('practice-history-screen').waitFor();
+    expect(await violations(page), 'practice history').toEqual([]);
     await context.close();
   });
 });

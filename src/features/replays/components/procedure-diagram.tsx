@@ -63,22 +63,30 @@ export function ProcedureDiagram({ layout, path, currentId, currentTag, height, 
       </View>
       <View
         testID="procedure-diagram"
-        role="img"
-        aria-label={summary}
         onLayout={(e: LayoutChangeEvent) => setViewportHeight(e.nativeEvent.layout.height)}
         style={[styles.viewport, height === undefined ? styles.fill : { height }, { borderColor: c.border, backgroundColor: c.surfaceSunken }]}
       >
-        <ScrollView ref={outer} nestedScrollEnabled>
-          <ScrollView ref={inner} horizontal nestedScrollEnabled onLayout={(e: LayoutChangeEvent) => setViewportWidth(e.nativeEvent.layout.width)}>
-            <Svg width={layout.width * scale} height={layout.height * scale} viewBox={`0 0 ${layout.width} ${layout.height}`} aria-hidden>
-              {edges.map((e) => (
-                <Arrow key={edgeKey(e.from, e.to)} edge={e} state={path.taken.has(edgeKey(e.from, e.to)) ? 'taken' : path.detours.has(edgeKey(e.from, e.to)) ? 'detour' : 'idle'} c={c} />
-              ))}
-              {layout.nodes.map((n) => (
-                <Node key={n.id} node={n} visited={path.visited.has(n.id)} current={n.id === currentId} c={c} />
-              ))}
-              {current ? <CurrentTag node={current} text={currentTag} c={c} /> : null}
-            </Svg>
+        {/* Focusable so the keyboard can scroll it too. */}
+        <ScrollView ref={outer} nestedScrollEnabled tabIndex={0} aria-label="Procedure diagram, scrolls up and down">
+          <ScrollView
+            ref={inner}
+            horizontal
+            nestedScrollEnabled
+            tabIndex={0}
+            aria-label="Procedure diagram, scrolls sideways"
+            onLayout={(e: LayoutChangeEvent) => setViewportWidth(e.nativeEvent.layout.width)}
+          >
+            <View role="img" aria-label={summary}>
+              <Svg width={layout.width * scale} height={layout.height * scale} viewBox={`0 0 ${layout.width} ${layout.height}`} aria-hidden>
+                {edges.map((e) => (
+                  <Arrow key={edgeKey(e.from, e.to)} edge={e} state={path.taken.has(edgeKey(e.from, e.to)) ? 'taken' : path.detours.has(edgeKey(e.from, e.to)) ? 'detour' : 'idle'} c={c} />
+                ))}
+                {layout.nodes.map((n) => (
+                  <Node key={n.id} node={n} visited={path.visited.has(n.id)} current={n.id === currentId} c={c} />
+                ))}
+                {current ? <CurrentTag node={current} text={currentTag} c={c} /> : null}
+              </Svg>
+            </View>
           </ScrollView>
         </ScrollView>
       </View>
