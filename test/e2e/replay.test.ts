@@ -124,6 +124,22 @@ describe('an apprentice on a phone', () => {
   });
 });
 
+describe('a technician with no practice yet', () => {
+  it('sees the empty practice history, and a replay that is not there says so', async () => {
+    const { context, page } = await openPage(browser, server.url, 'phone');
+    await signIn(page, demo('tech').email, DEMO_PASSWORD, 'bench');
+    await page.goto('/replays/practice');
+    await page.getByTestId('practice-empty').waitFor();
+    await shot(page, 'phone', 'practice-history-empty');
+    await page.goto('/replays/00000000-0000-4000-8000-000000000000');
+    await page.getByTestId('replay-not-found').waitFor();
+    await shot(page, 'phone', 'replay-not-found');
+    await page.getByTestId('replay-not-found-back').click();
+    await page.getByTestId('replays-cards').waitFor();
+    await context.close();
+  });
+});
+
 describe.each(['phone', 'desk'] as Size[])('accessibility at %s size', (size) => {
   it('has no serious violations in a replay, watching and practising', async () => {
     // axe is injected as a script, which the app's Content-Security-Policy rightly refuses; this context bypasses it.

@@ -6,6 +6,7 @@ import type { DiagnosisDetail } from '@shared/api/diagnosis-types';
 import type { PracticeResult, StepCommentView } from '@shared/api/replay-types';
 import { practiceQuestions } from '@shared/practice/questions';
 import { Button } from '@/components/ui/button';
+import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Text } from '@/components/ui/text';
@@ -34,7 +35,17 @@ export function ReplayScreen() {
   const practice = mode === 'practice';
 
   let body;
-  if (replay.error) {
+  if (replay.error?.status === 404) {
+    body = (
+      <EmptyState
+        testID="replay-not-found"
+        icon="replays"
+        title="This replay isn't here"
+        body="It may belong to another shop, or still be in progress: only concluded diagnoses can be replayed. Pick one from the list."
+        action={{ label: 'All replays', testID: 'replay-not-found-back', onPress: () => router.navigate('/replays') }}
+      />
+    );
+  } else if (replay.error) {
     body = <ErrorState title="This replay can't be shown" error={replay.error} onRetry={() => void replay.mutate()} />;
   } else if (!replay.data) {
     body = <LoadingState label="Loading the replay…" />;
