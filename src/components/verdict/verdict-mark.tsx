@@ -21,7 +21,7 @@ const SHAPES: Record<Verdict, { fill?: string; stroke: string[] }> = {
 };
 
 /** A verdict's shape in its colour; lines over a solid shape are cut out in the tint behind it. */
-export function VerdictShape({ verdict, size = 24 }: { verdict: Verdict; size?: number }) {
+function VerdictShape({ verdict, size = 24 }: { verdict: Verdict; size?: number }) {
   const c = useTheme();
   const t = tint(verdict, c);
   const shape = SHAPES[verdict];
