@@ -113,13 +113,16 @@ describe('an apprentice on a phone', () => {
     await context.close();
   });
 
-  it('shows the replays list in the dark theme', async () => {
+  it('reads in the dark theme, diagram included', async () => {
     const { context, page } = await openPage(browser, server.url, 'phone', 'dark');
     await signIn(page, demo('apprentice').email, DEMO_PASSWORD, 'replays');
     const fellrunner = await detail('Fellrunner');
     await page.getByTestId(`replay-watch-${fellrunner.id}`).click();
     await page.getByTestId('replay-step-1').waitFor();
     await shot(page, 'phone', 'replay-dark');
+    await page.getByTestId('replay-next').click();
+    await page.getByTestId('replay-diagram-toggle').click();
+    await shot(page, 'phone', 'replay-dark-diagram', page.getByTestId('procedure-diagram'));
     await context.close();
   });
 });
