@@ -12,6 +12,7 @@ import { photoRoutes } from './photos/photos.routes';
 import { procedureRoutes } from './procedures/procedures.routes';
 import { reportRoutes } from './report/report.routes';
 import { commentRoutes } from './replays/comments.routes';
+import { insightRoutes } from './replays/insight.routes';
 import { practiceRoutes } from './replays/practice.routes';
 
 /**
@@ -34,4 +35,5 @@ export const routeTable: readonly RouteDef[] = [
   ...reportRoutes,
   ...commentRoutes,
   ...practiceRoutes,
+  ...insightRoutes,
 ];

@@ -1,3 +1,5 @@
+import type { ProcedureDocument } from '../engine/procedure';
+import type { ProcedureInsight } from '../insight/procedure-insight';
 import type { PracticeAsk } from '../practice/schemas';
 
 /** JSON shapes of step comments and practice attempts. */
@@ -34,4 +36,12 @@ export interface PracticeResult {
   attempt: PracticeAttemptView;
   expectedLabel: string;
   explanation: string;
+}
+
+/** What the concluded diagnoses of one procedure version say about it, with the version's document to draw. */
+export interface VersionInsight extends ProcedureInsight {
+  procedureId: string;
+  title: string;
+  versionNumber: number;
+  document: ProcedureDocument;
 }

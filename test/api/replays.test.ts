@@ -193,3 +193,28 @@ describe('practice history belongs to its owner', () => {
     expect(await mine('outsider')).toEqual([]);
   });
 });
+
+describe('insight for leads', () => {
+  const path = (d: DiagnosisDetail, n = d.versionNumber) => `/api/procedures/${d.procedureId}/versions/${n}/insight`;
+
+  it('sums the concluded diagnoses of a version: the Tessa path, its marginal re-test counted as a loop', async () => {
+    const res = await get('lead', path(tessa));
+    expect(res.status).toBe(200);
+    const insight = res.body.insight;
+    expect(insight).toMatchObject({ diagnoses: 1, versionNumber: 1, findings: [{ checkId: 'finding-sensor-harness', count: 1 }] });
+    expect(insight.edges).toContainEqual({ from: 'sensor-resistance', to: 'sensor-resistance', count: 1 });
+    // One path of 9 steps with sensor-resistance run twice (p = ½ of looping): 7 + 2 = 9 expected checks, and
+    // the expected time is the path's own 58 minutes (the loop's mean step time counted twice).
+    expect(insight.expected.checks).toBeCloseTo(9, 9);
+    expect(insight.expected.ms / 60_000).toBeCloseTo(58, 9);
+    expect(insight.document.startCheckId).toBe('spark-test');
+  });
+
+  it('is for leads and owners of the shop only', async () => {
+    expect((await get('owner', path(tessa))).status).toBe(200);
+    expect((await get('apprentice', path(tessa))).status).toBe(403);
+    expect((await get('outsider', path(tessa))).status).toBe(403);
+    expect((await request(h.app).get(path(tessa)).set('authorization', `Bearer ${await h.otherShopToken()}`)).status).toBe(404);
+    expect((await get('lead', path(tessa, 99))).status).toBe(404);
+  });
+});
