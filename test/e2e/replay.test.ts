@@ -215,3 +215,61 @@ describe('a lead at a desk', () => {
     await context.close();
   });
 });
+
+/** Calls the API as a member, for writes: the demo shop's technician runs diagnoses for the insight below. */
+async function writerAs(email: string) {
+  const signInResponse = await fetch(`${server.url}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
+  });
+  const { token } = (await signInResponse.json()) as { token: string };
+  return async <T>(method: 'GET' | 'POST', pathname: string, body?: object): Promise<T> => {
+    const response = await fetch(`${server.url}${pathname}`, {
+      method,
+      headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
+      body: body ? JSON.stringify(body) : undefined,
+    });
+    if (!response.ok) throw new Error(`${method} ${pathname}: ${response.status} ${await response.text()}`);
+    return (await response.json()) as T;
+  };
+}
+
+/** Parked-drain diagnoses as typed at the bench (invented readings); the engine judges each step. */
+const DRAIN_RUNS: { checkId: string; reading?: string; choiceId?: string }[][] = [
+  [{ checkId: 'battery-ocv', reading: '12.62 V' }, { checkId: 'draw-setup' }, { checkId: 'draw-amps', reading: '2.1 mA' }],
+  [{ checkId: 'battery-ocv', reading: '12.6' }, { checkId: 'draw-setup' }, { checkId: 'draw-amps', reading: '31 mA' }, { checkId: 'fuse-pull', choiceId: 'accessory' }, { checkId: 'accessory-loads', choiceId: 'grips' }],
+  [{ checkId: 'battery-ocv', reading: '12.7 V' }, { checkId: 'draw-setup' }, { checkId: 'draw-amps', reading: '25 mA' }, { checkId: 'fuse-pull', choiceId: 'accessory' }, { checkId: 'accessory-loads', choiceId: 'usb' }],
+  [{ checkId: 'battery-ocv', reading: '12.1 V' }, { checkId: 'charge-battery' }, { checkId: 'draw-setup' }, { checkId: 'draw-amps', reading: '40 mA' }, { checkId: 'fuse-pull', choiceId: 'ecu' }],
+  [{ checkId: 'battery-ocv', reading: '12.65' }, { checkId: 'draw-setup' }, { checkId: 'draw-amps', reading: '18 mA' }, { checkId: 'fuse-pull', choiceId: 'none' }, { checkId: 'reg-unplug-draw', reading: '2 mA' }],
+];
+
+describe('a lead reading the insight at a desk', () => {
+  it('sees counts, times, expectations and the diagram for a procedure version', async () => {
+    const tech = await writerAs(demo('tech').email);
+    const { procedures } = await tech<{ procedures: { id: string; title: string }[] }>('GET', '/api/procedures');
+    const drain = procedures.find((p) => p.title.startsWith('Battery drains'))!;
+    const { jobs } = await tech<{ jobs: { id: string }[] }>('GET', '/api/jobs');
+    const { meters } = await tech<{ meters: { id: string }[] }>('GET', '/api/meters');
+    for (const run of DRAIN_RUNS) {
+      const { diagnosis } = await tech<{ diagnosis: { id: string } }>('POST', '/api/diagnoses', { procedureId: drain.id, jobId: jobs[0].id, meterId: meters[0].id, ambientC: 20 });
+      for (const step of run) await tech('POST', `/api/diagnoses/${diagnosis.id}/steps`, step);
+      await tech('POST', `/api/diagnoses/${diagnosis.id}/conclude`, { note: 'Found and fixed.' });
+    }
+
+    const { context, page } = await openPage(browser, server.url, 'desk');
+    await signIn(page, demo('lead').email, DEMO_PASSWORD, 'bench');
+    await page.getByTestId('nav-replays').click();
+    await page.getByTestId('replays-insight').click();
+    await page.getByTestId('insight-screen').waitFor();
+    await page.getByTestId(`insight-procedure-${drain.id}`).click();
+    await page.getByTestId('insight-report').waitFor();
+    // The seeded Marra diagnosis and the five above.
+    expect(await text(page, 'insight-count')).toContain('6');
+    expect(await text(page, 'insight-findings')).toContain('USB socket drains the battery');
+    expect(await page.getByTestId('procedure-diagram').count()).toBe(1);
+    await shot(page, 'desk', 'insight');
+    await shot(page, 'desk', 'insight-diagram', page.getByTestId('procedure-diagram'));
+    await context.close();
+  });
+});

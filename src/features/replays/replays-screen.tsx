@@ -28,7 +28,12 @@ export function ReplaysScreen() {
       testID="replays-screen"
       title="Replays"
       subtitle="Concluded diagnoses, step by step: watch the path a technician took, or practise making the calls yourself."
-      actions={<Button testID="replays-practice-history" label={team ? 'Team practice' : 'My practice'} icon="check" onPress={() => router.navigate('/replays/practice')} />}
+      actions={
+        <View style={styles.actions}>
+          <Button testID="replays-practice-history" label={team ? 'Team practice' : 'My practice'} icon="check" onPress={() => router.navigate('/replays/practice')} />
+          {team ? <Button testID="replays-insight" label="Insight" icon="procedures" onPress={() => router.navigate('/replays/insight')} /> : null}
+        </View>
+      }
     >
       <ReplayList />
     </Screen>

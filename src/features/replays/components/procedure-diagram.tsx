@@ -19,6 +19,8 @@ interface ProcedureDiagramProps {
   height?: number;
   /** Screen-reader summary of where the path went. */
   summary: string;
+  /** How often each arrow was taken, by edgeKey: written on the arrows and drawn as their weight (insight). */
+  counts?: ReadonlyMap<string, number>;
 }
 
 /** Close up: node titles at about 13 px. */
@@ -29,7 +31,7 @@ const CLOSE_UP = 0.85;
  * thick, detours dashed, and the current check outlined and tagged. Too big for a pane at a readable size,
  * so it scrolls both ways and follows the current check.
  */
-export function ProcedureDiagram({ layout, path, currentId, currentTag, height, summary }: ProcedureDiagramProps) {
+export function ProcedureDiagram({ layout, path, currentId, currentTag, height, summary, counts }: ProcedureDiagramProps) {
   const c = useTheme();
   const outer = useRef<ScrollView>(null);
   const inner = useRef<ScrollView>(null);
@@ -50,6 +52,7 @@ export function ProcedureDiagram({ layout, path, currentId, currentTag, height, 
   }, [current, viewportWidth, viewportHeight, scale, whole]);
 
   // Path arrows go on top of the rest so a crossing never hides them.
+  const most = counts ? Math.max(1, ...counts.values()) : 1;
   const edges = useMemo(() => {
     const rank = (e: DiagramEdge) => (path.taken.has(edgeKey(e.from, e.to)) ? 2 : path.detours.has(edgeKey(e.from, e.to)) ? 1 : 0);
     return [...layout.edges].sort((a, b) => rank(a) - rank(b));
@@ -79,7 +82,14 @@ export function ProcedureDiagram({ layout, path, currentId, currentTag, height, 
             <View role="img" aria-label={summary}>
               <Svg width={layout.width * scale} height={layout.height * scale} viewBox={`0 0 ${layout.width} ${layout.height}`} aria-hidden>
                 {edges.map((e) => (
-                  <Arrow key={edgeKey(e.from, e.to)} edge={e} state={path.taken.has(edgeKey(e.from, e.to)) ? 'taken' : path.detours.has(edgeKey(e.from, e.to)) ? 'detour' : 'idle'} c={c} />
+                  <Arrow
+                    key={edgeKey(e.from, e.to)}
+                    edge={e}
+                    state={path.taken.has(edgeKey(e.from, e.to)) ? 'taken' : path.detours.has(edgeKey(e.from, e.to)) ? 'detour' : 'idle'}
+                    count={counts ? (counts.get(edgeKey(e.from, e.to)) ?? 0) : null}
+                    most={most}
+                    c={c}
+                  />
                 ))}
                 {layout.nodes.map((n) => (
                   <Node key={n.id} node={n} visited={path.visited.has(n.id)} current={n.id === currentId} c={c} />
@@ -95,31 +105,42 @@ export function ProcedureDiagram({ layout, path, currentId, currentTag, height, 
           Scroll the diagram to see the rest of the procedure.
         </Text>
       )}
-      <Legend c={c} />
+      <Legend c={c} weighted={counts !== undefined} />
     </View>
   );
 }
 
-function Arrow({ edge, state, c }: { edge: DiagramEdge; state: 'taken' | 'detour' | 'idle'; c: Palette }) {
+interface ArrowProps {
+  edge: DiagramEdge;
+  state: 'taken' | 'detour' | 'idle';
+  /** Times taken, for insight; null in a replay. */
+  count: number | null;
+  most: number;
+  c: Palette;
+}
+
+function Arrow({ edge, state, count, most, c }: ArrowProps) {
   const pts = edge.points;
   if (pts.length < 2) return null;
   const d = pts.map((p, i) => `${i === 0 ? 'M' : 'L'}${p.x.toFixed(1)} ${p.y.toFixed(1)}`).join('');
   const stroke = state === 'taken' ? c.primary : state === 'detour' ? c.danger : c.borderStrong;
-  const widthOf = state === 'taken' ? 4.5 : state === 'detour' ? 3 : 1.5;
+  const widthOf = count ? 2 + (6 * count) / most : state === 'taken' ? 4.5 : state === 'detour' ? 3 : 1.5;
+  const label = count ? [edge.label, `×${count}`].filter(Boolean).join(' · ') : edge.label;
+  const labelAt = edge.labelAt ?? (count ? pts[pts.length >> 1] : null);
   const [a, b] = [pts[pts.length - 2], pts[pts.length - 1]];
   const angle = Math.atan2(b.y - a.y, b.x - a.x);
   const size = state === 'idle' ? 8 : 12;
   const head = [angle + Math.PI * 0.85, angle - Math.PI * 0.85].map((t) => `${(b.x + size * Math.cos(t)).toFixed(1)} ${(b.y + size * Math.sin(t)).toFixed(1)}`);
-  const labelWidth = edge.label.length * 7.2 + 8;
+  const labelWidth = label.length * 7.2 + 8;
   return (
     <G>
       <Path d={d} stroke={stroke} strokeWidth={widthOf} fill="none" strokeDasharray={state === 'detour' ? '8 6' : undefined} strokeLinejoin="round" />
       <Path d={`M${b.x} ${b.y}L${head[0]}L${head[1]}Z`} fill={stroke} />
-      {edge.labelAt && edge.label ? (
+      {labelAt && label ? (
         <G>
-          <Rect x={edge.labelAt.x - labelWidth / 2} y={edge.labelAt.y - 10} width={labelWidth} height={20} rx={4} fill={c.surfaceSunken} />
-          <SvgText x={edge.labelAt.x} y={edge.labelAt.y + 4.5} fontSize={13} fontFamily={state === 'idle' ? fonts.regular : fonts.bold} fill={state === 'idle' ? c.textMuted : c.text} textAnchor="middle">
-            {edge.label}
+          <Rect x={labelAt.x - labelWidth / 2} y={labelAt.y - 10} width={labelWidth} height={20} rx={4} fill={c.surfaceSunken} />
+          <SvgText x={labelAt.x} y={labelAt.y + 4.5} fontSize={13} fontFamily={state === 'idle' ? fonts.regular : fonts.bold} fill={state === 'idle' ? c.textMuted : c.text} textAnchor="middle">
+            {label}
           </SvgText>
         </G>
       ) : null}
@@ -197,7 +218,7 @@ const LEGEND: { kind: CheckKind; label: string }[] = [
   { kind: 'finding', label: 'Finding' },
 ];
 
-function Legend({ c }: { c: Palette }) {
+function Legend({ c, weighted }: { c: Palette; weighted: boolean }) {
   return (
     <View style={styles.legend} aria-hidden>
       {LEGEND.map(({ kind, label }) => (
@@ -212,20 +233,24 @@ function Legend({ c }: { c: Palette }) {
         <Svg width={34} height={20} viewBox="0 0 34 20">
           <Path d="M2 10H32" stroke={c.primary} strokeWidth={4.5} />
         </Svg>
-        <Text variant="small">Path taken</Text>
+        <Text variant="small">{weighted ? 'Taken: thicker means more often' : 'Path taken'}</Text>
       </View>
-      <View style={styles.legendItem}>
-        <Svg width={34} height={20} viewBox="0 0 34 20">
-          <Path d="M2 10H32" stroke={c.danger} strokeWidth={3} strokeDasharray="8 6" />
-        </Svg>
-        <Text variant="small">Taken back</Text>
-      </View>
-      <View style={styles.legendItem}>
-        <Svg width={34} height={20} viewBox="0 0 34 20">
-          <Rect x={3} y={3} width={28} height={14} rx={5} fill="none" stroke={c.signal} strokeWidth={4} />
-        </Svg>
-        <Text variant="small">This step</Text>
-      </View>
+      {weighted ? null : (
+        <>
+          <View style={styles.legendItem}>
+            <Svg width={34} height={20} viewBox="0 0 34 20">
+              <Path d="M2 10H32" stroke={c.danger} strokeWidth={3} strokeDasharray="8 6" />
+            </Svg>
+            <Text variant="small">Taken back</Text>
+          </View>
+          <View style={styles.legendItem}>
+            <Svg width={34} height={20} viewBox="0 0 34 20">
+              <Rect x={3} y={3} width={28} height={14} rx={5} fill="none" stroke={c.signal} strokeWidth={4} />
+            </Svg>
+            <Text variant="small">This step</Text>
+          </View>
+        </>
+      )}
     </View>
   );
 }
