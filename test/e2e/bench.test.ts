@@ -216,6 +216,7 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
 
     await page.getByTestId('open-report').click();
     await page.waitForURL(`**/report/${id}`);
+    await page.getByTestId('report-paper').getByText('Pulse coil harness fault').first().waitFor();
     await context.close();
   });
 
