@@ -50,7 +50,7 @@ export function drawSpecBar(doc: Doc, x: number, y: number, width: number, m: { 
 
 /**
  * Each verdict has its own shape beside its word, so the report never relies on colour: the same drawings
- * as the app's verdict icons (src/components/ui/icon.tsx), on their 24-unit grid.
+ * as the app's verdict icons (src/components/verdict/verdict-mark.tsx), on their 24-unit grid.
  */
 const VERDICT_PATHS: Record<Verdict, { fill?: string; stroke: string[] }> = {
   in_spec: { fill: 'M21.5 12a9.5 9.5 0 1 1-19 0a9.5 9.5 0 1 1 19 0z', stroke: ['M7.5 12.5l3 3 6-6.5'] },
