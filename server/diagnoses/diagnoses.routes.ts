@@ -144,7 +144,7 @@ export const diagnosisRoutes: RouteDef[] = [
         const decision = decideStep(store.document(d.versionId), input.checkId, { reading: input.reading, choiceId: input.choiceId }, {
           meterRanges: d.meterRanges,
           ambientC: d.ambientC,
-          path: path.map((p) => ({ checkId: p.checkId, value: p.valueSi, overRange: p.overRange, uncertainty: p.uncertainty })),
+          path,
         });
         if (!decision.ok) throw new ApiError(400, decision.code, decision.message, { [decision.field]: decision.message });
         const step: NewStep = {

@@ -1,6 +1,8 @@
 import crypto from 'node:crypto';
 import type Database from 'better-sqlite3';
 import type { DataSource } from 'typeorm';
+import type { PathSoFar } from '@shared/diagnosis/decide-step';
+import { pathSoFar } from '@shared/diagnosis/path-so-far';
 import type { Evaluation } from '@shared/engine/evaluate';
 import type { ProcedureDocument } from '@shared/engine/procedure';
 import type { Verdict } from '@shared/engine/verdict';
@@ -21,14 +23,6 @@ export interface OpenDiagnosis {
   currentCheckId: string;
   ambientC: number;
   meterRanges: MeterRange[];
-}
-
-export interface PathStep {
-  seq: number;
-  checkId: string;
-  valueSi: number | null;
-  overRange: boolean;
-  uncertainty: number | undefined;
 }
 
 export interface NewStep {
@@ -90,14 +84,17 @@ export class StepStore {
   }
 
   /** Every step, retracted ones included, so the next sequence number is right; `path` keeps the live ones. */
-  steps(diagnosisId: string): { lastSeq: number; path: PathStep[] } {
+  steps(diagnosisId: string): { lastSeq: number; path: PathSoFar } {
     const rows = this.pathQuery.all(diagnosisId) as { seq: number; checkId: string; valueSi: number | null; overRange: number; retracted: number; evaluation: string | null }[];
-    const path: PathStep[] = [];
-    for (const r of rows) {
-      if (r.retracted) continue;
-      const uncertainty = r.evaluation ? (JSON.parse(r.evaluation) as Evaluation).uncertainty : undefined;
-      path.push({ seq: r.seq, checkId: r.checkId, valueSi: r.valueSi, overRange: r.overRange === 1, uncertainty });
-    }
+    const path = pathSoFar(
+      rows.map((r) => ({
+        checkId: r.checkId,
+        valueSi: r.valueSi,
+        overRange: r.overRange === 1,
+        retracted: r.retracted === 1,
+        evaluation: r.retracted || r.evaluation === null ? null : (JSON.parse(r.evaluation) as Evaluation),
+      })),
+    );
     return { lastSeq: rows.length ? rows[rows.length - 1].seq : 0, path };
   }
 

@@ -1,5 +1,6 @@
 import type { Role } from '@shared/auth/roles';
-import { decideStep, type PathSoFar } from '@shared/diagnosis/decide-step';
+import { decideStep } from '@shared/diagnosis/decide-step';
+import { pathSoFar } from '@shared/diagnosis/path-so-far';
 import type { Evaluation } from '@shared/engine/evaluate';
 import type { ProcedureDocument } from '@shared/engine/procedure';
 import type { Verdict } from '@shared/engine/verdict';
@@ -192,7 +193,6 @@ export interface Replay {
  * leaves the diagnosis at its check. Throws when the script and the engine disagree.
  */
 export function replayDiagnosis(document: ProcedureDocument, script: DemoDiagnosis, meterRanges: readonly MeterRange[]): Replay {
-  const path: PathSoFar[number][] = [];
   const steps: ReplayedStep[] = [];
   let current = document.startCheckId;
   const fail = (seq: number, message: string): never => {
@@ -201,7 +201,11 @@ export function replayDiagnosis(document: ProcedureDocument, script: DemoDiagnos
   for (const [i, step] of script.steps.entries()) {
     const seq = i + 1;
     if (step.checkId !== current) fail(seq, `scripted for “${step.checkId}” but the diagnosis is at “${current}”.`);
-    const decision = decideStep(document, step.checkId, { reading: step.reading, choiceId: step.choiceId }, { meterRanges, ambientC: script.ambientC, path });
+    const decision = decideStep(document, step.checkId, { reading: step.reading, choiceId: step.choiceId }, {
+      meterRanges,
+      ambientC: script.ambientC,
+      path: pathSoFar(steps.map((s) => ({ ...s, retracted: s.retractedAtMin !== null }))),
+    });
     if (!decision.ok) return fail(seq, decision.message);
     if (step.expect !== undefined && decision.verdict !== step.expect) fail(seq, `the story needs ${step.expect} but the engine says ${decision.verdict}.`);
     steps.push({
@@ -218,10 +222,7 @@ export function replayDiagnosis(document: ProcedureDocument, script: DemoDiagnos
       atMin: step.atMin,
       retractedAtMin: step.retractedAtMin ?? null,
     });
-    if (step.retractedAtMin === undefined) {
-      path.push({ checkId: step.checkId, value: decision.value, overRange: decision.overRange, uncertainty: decision.evaluation?.uncertainty });
-      current = decision.nextCheckId;
-    }
+    if (step.retractedAtMin === undefined) current = decision.nextCheckId;
   }
   const expected = script.conclusion?.findingCheckId ?? script.waitingAt;
   if (current !== expected) fail(steps.length, `the path ends at “${current}”, not at “${expected}”.`);

@@ -1,6 +1,7 @@
 import { useMemo, useState } from 'react';
 import { StyleSheet, TextInput, View } from 'react-native';
 import { decideStep } from '@shared/diagnosis/decide-step';
+import { pathSoFar } from '@shared/diagnosis/path-so-far';
 import { checkUncertainty, windowOnly } from '@shared/diagnosis/spec-bar-geometry';
 import type { PriorReading } from '@shared/engine/evaluate';
 import { explainEvaluation } from '@shared/engine/explain';
@@ -13,7 +14,6 @@ import { FormError } from '@/components/ui/form-error';
 import { Text } from '@/components/ui/text';
 import { VerdictChip, VerdictLine, VerdictPanel } from '@/components/verdict/verdict-mark';
 import { radius, space, type, useTheme } from '@/lib/theme';
-import { pathSoFar } from '../offline/local-path';
 import { BackButton } from './back-button';
 import { CheckDetails } from './check-details';
 import { NoteField } from './note-field';

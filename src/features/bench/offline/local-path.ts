@@ -1,5 +1,6 @@
 import type { DiagnosisDetail, StepView } from '@shared/api/diagnosis-types';
-import { decideStep, type PathSoFar } from '@shared/diagnosis/decide-step';
+import { decideStep } from '@shared/diagnosis/decide-step';
+import { pathSoFar } from '@shared/diagnosis/path-so-far';
 import type { Evaluation } from '@shared/engine/evaluate';
 import type { Verdict } from '@shared/engine/verdict';
 import { entriesOf, type OutboxEntry, type StepBody } from './step-outbox';
@@ -122,13 +123,6 @@ export function localDiagnosis(detail: DiagnosisState, outbox: readonly OutboxEn
     waitingCount++;
   }
   return { steps, notRecorded, currentCheckId: current, pendingCount, waitingCount };
-}
-
-/** The live path as `decideStep` takes it: retracted steps left out, uncertainties from their evaluations. */
-export function pathSoFar(steps: readonly PathStep[]): PathSoFar {
-  return steps
-    .filter((s) => !s.retracted)
-    .map((s) => ({ checkId: s.checkId, value: s.valueSi, overRange: s.overRange, uncertainty: s.evaluation?.uncertainty }));
 }
 
 function lastLive(steps: PathStep[]): PathStep | undefined {
