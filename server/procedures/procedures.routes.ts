@@ -2,6 +2,7 @@ import { In, IsNull, Not } from 'typeorm';
 import { procedureFile, procedureFileName, readProcedureFile } from '@shared/procedures/exchange-format';
 import type { ProcedureDocument } from '@shared/engine/procedure';
 import type { DraftDetail, ProcedureDetail, ProcedureSummary, VersionDetail, VersionSummary } from '@shared/api/procedure-types';
+import { copyTitle } from '@shared/procedures/copy-title';
 import { copyDraftSchema, createProcedureSchema, newDraftSchema, publishDraftSchema, saveDraftSchema } from '@shared/procedures/schemas';
 import type { CreateProcedureInput, PublishDraftInput } from '@shared/procedures/schemas';
 import { Diagnosis } from '../diagnoses/diagnosis.entity';
@@ -102,8 +103,6 @@ async function createWithDraft(ctx: Parameters<RouteDef['handler']>[2], req: Aut
   });
 }
 
-const copyTitle = (title: string) => (title.length > 113 ? title.slice(0, 113) : title) + ' (copy)';
-
 export const procedureRoutes: RouteDef[] = [
   {
     method: 'get',
@@ -153,13 +152,17 @@ export const procedureRoutes: RouteDef[] = [
   {
     method: 'post',
     path: '/api/procedures/:id/copy',
-    summary: 'A new procedure, titled "… (copy)", whose draft is the document sent: how an editor keeps its changes after a conflicting save.',
+    summary:
+      'A new procedure, titled "… (copy)" (numbered when that title is taken), whose draft is the document sent (an editor keeping its changes after a conflicting save) or, without one, a copy of the draft, else of the latest version (Duplicate).',
     roles: AUTHORS,
     body: copyDraftSchema,
     async handler(req, res, ctx) {
       const p = await findProcedure(req, ctx);
-      const document = readDocument((req.body as { document: unknown }).document);
-      const { procedure, draft } = await createWithDraft(ctx, req, { title: copyTitle(p.title), complaint: p.complaint, family: p.family }, document);
+      const sent = (req.body as { document?: unknown }).document;
+      const document = sent === undefined ? await latestDocument(ctx, p.id) : readDocument(sent);
+      const titles = await ctx.ds.getRepository(Procedure).find({ where: { shopId: req.member.shopId }, select: { title: true } });
+      const meta = { title: copyTitle(p.title, titles.map((t) => t.title)), complaint: p.complaint, family: p.family };
+      const { procedure, draft } = await createWithDraft(ctx, req, meta, document);
       res.status(201).json({ procedure: summary(procedure, [draft], await activityOf(ctx, req.member.shopId, [draft], [procedure])) });
     },
   },
@@ -341,6 +344,14 @@ export const procedureRoutes: RouteDef[] = [
     },
   },
 ];
+
+/** What Duplicate copies: the draft being written, else the highest-numbered version (published or retired). */
+async function latestDocument(ctx: Parameters<RouteDef['handler']>[2], procedureId: string): Promise<ProcedureDocument> {
+  const repo = ctx.ds.getRepository(ProcedureVersion);
+  const v = (await repo.findOneBy({ procedureId, status: 'draft' })) ?? (await repo.findOne({ where: { procedureId, number: Not(IsNull()) }, order: { number: 'DESC' } }));
+  if (!v) throw notFound('version');
+  return v.document;
+}
 
 async function userNames(ctx: Parameters<RouteDef['handler']>[2], versions: ProcedureVersion[]) {
   const ids = [...new Set(versions.map((v) => v.publishedById).filter((x): x is string => !!x))];

@@ -23,8 +23,8 @@ export const saveDraftSchema = yup.object({
   document: yup.mixed().required('Send the procedure document.'),
 });
 
-/** Keep an editor's document as a new procedure (after a conflicting save). */
-export const copyDraftSchema = yup.object({ document: yup.mixed().required('Send the procedure document.') });
+/** A new procedure from this one: with `document`, an editor's unsaved work (after a conflicting save); without, a duplicate of the latest. */
+export const copyDraftSchema = yup.object({ document: yup.mixed().optional() });
 
 export const publishDraftSchema = yup.object({
   revision,

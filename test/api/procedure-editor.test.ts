@@ -99,10 +99,48 @@ describe('copies, notes and other shops', () => {
     expect(seen.body.procedures.some((p: { id: string }) => p.id === copy.body.procedure.id)).toBe(true);
   });
 
+  it('duplicates without a document: the draft when there is one, else the latest version, titled as a numbered copy', async () => {
+    const list = (await request(h.app).get('/api/procedures').set(as(lead))).body.procedures as { id: string; title: string; hasDraft: boolean; latestVersion: { number: number } | null }[];
+    const published = list.find((p) => !p.hasDraft && p.latestVersion)!;
+    const version = await request(h.app).get(`/api/procedures/${published.id}/versions/${published.latestVersion!.number}`).set(as(lead));
+    const first = await request(h.app).post(`/api/procedures/${published.id}/copy`).set(as(lead)).send({});
+    expect(first.status).toBe(201);
+    expect(first.body.procedure).toMatchObject({ title: `${published.title} (copy)`, hasDraft: true, latestVersion: null, timesRun: 0 });
+    const copied = await request(h.app).get(`/api/procedures/${first.body.procedure.id}/draft`).set(as(lead));
+    expect(copied.body.draft).toMatchObject({ revision: 1, document: version.body.version.document });
+
+    // A second duplicate, and a duplicate of the copy, are numbered from the original's title.
+    const second = await request(h.app).post(`/api/procedures/${published.id}/copy`).set(as(lead)).send({});
+    expect(second.body.procedure.title).toBe(`${published.title} (copy 2)`);
+    const ofCopy = await request(h.app).post(`/api/procedures/${first.body.procedure.id}/copy`).set(as(lead)).send({});
+    expect(ofCopy.body.procedure.title).toBe(`${published.title} (copy 3)`);
+
+    // With a draft, the draft is what is copied, not the published version.
+    const saved = await request(h.app).put(`/api/procedures/${first.body.procedure.id}/draft`).set(as(lead)).send({ revision: 1, document: fixtureProcedure() });
+    expect(saved.status).toBe(200);
+    const fromDraft = await request(h.app).post(`/api/procedures/${first.body.procedure.id}/copy`).set(as(lead)).send({});
+    const draft = await request(h.app).get(`/api/procedures/${fromDraft.body.procedure.id}/draft`).set(as(lead));
+    expect(draft.body.draft.document).toEqual(fixtureProcedure());
+  });
+
+  it('refuses a duplicate to a technician or an apprentice, and a malformed document with 400', async () => {
+    const mine = (await request(h.app).get('/api/procedures').set(as(lead))).body.procedures[0].id;
+    const before = (await request(h.app).get('/api/procedures').set(as(lead))).body.procedures.length;
+    for (const role of ['tech', 'apprentice'] as const) {
+      const token = await h.tokenFor(role);
+      expect((await request(h.app).post(`/api/procedures/${mine}/copy`).set(as(token)).send({})).status).toBe(403);
+    }
+    const bad = await request(h.app).post(`/api/procedures/${mine}/copy`).set(as(lead)).send({ document: { checks: 'none' } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.code).toBe('invalid_document');
+    expect((await request(h.app).get('/api/procedures').set(as(lead))).body.procedures.length).toBe(before);
+  });
+
   it("answers 404 for another shop's procedure on export and copy", async () => {
     const other = await h.otherShopToken();
     const mine = (await request(h.app).get('/api/procedures').set(as(lead))).body.procedures[0].id;
     expect((await request(h.app).get(`/api/procedures/${mine}/export`).set(as(other))).status).toBe(404);
     expect((await request(h.app).post(`/api/procedures/${mine}/copy`).set(as(other)).send({ document: fixtureProcedure() })).status).toBe(404);
+    expect((await request(h.app).post(`/api/procedures/${mine}/copy`).set(as(other)).send({})).status).toBe(404);
   });
 });
