@@ -2,6 +2,7 @@ import { jobSchema, type JobInput } from '@shared/workshop/schemas';
 import type { JobView } from '@shared/api/workshop-types';
 import { ApiError, notFound } from '../http/api-error';
 import type { RouteDef } from '../http/route';
+import { answerOnce } from '../idempotency/with-idempotency';
 import { Machine } from '../machines/machine.entity';
 import { toMachineView } from '../machines/machines.routes';
 import { Job } from './job.entity';
@@ -33,19 +34,18 @@ export const jobRoutes: RouteDef[] = [
   {
     method: 'post',
     path: '/api/jobs',
-    summary: 'Open a job: customer, complaint in their words, machine.',
+    summary: 'Open a job: customer, complaint in their words, machine. Honours Idempotency-Key.',
     roles: RUNNERS,
     body: jobSchema,
     async handler(req, res, ctx) {
       const input = req.body as JobInput;
       const shopId = req.member.shopId;
-      const job = await ctx.write(async (tx) => {
+      await answerOnce(ctx, req, res, async (tx) => {
         const machine = await tx.getRepository(Machine).findOneBy({ id: input.machineId, shopId });
         if (!machine) throw new ApiError(404, 'not_found', 'No machine with that id in your shop.', { machineId: 'Pick a machine of your shop.' });
         const saved = await tx.getRepository(Job).save({ ...input, shopId });
-        return { ...saved, machine };
+        return { status: 201, body: { job: toJobView({ ...saved, machine }) } };
       });
-      res.status(201).json({ job: toJobView(job) });
     },
   },
   {

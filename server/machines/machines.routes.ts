@@ -3,6 +3,7 @@ import type { MachineView } from '@shared/api/workshop-types';
 import { checkVin } from '@shared/engine/vin';
 import { notFound } from '../http/api-error';
 import type { RouteDef } from '../http/route';
+import { answerOnce } from '../idempotency/with-idempotency';
 import { Machine } from './machine.entity';
 
 const RUNNERS = ['owner', 'lead', 'tech'] as const;
@@ -34,13 +35,15 @@ export const machineRoutes: RouteDef[] = [
   {
     method: 'post',
     path: '/api/machines',
-    summary: 'Record a machine (make, model, year, engine, VIN, mileage).',
+    summary: 'Record a machine (make, model, year, engine, VIN, mileage). Honours Idempotency-Key.',
     roles: RUNNERS,
     body: machineSchema,
     async handler(req, res, ctx) {
       const input = req.body as MachineInput;
-      const saved = await ctx.write((tx) => tx.getRepository(Machine).save({ ...input, shopId: req.member.shopId }));
-      res.status(201).json({ machine: toMachineView(saved) });
+      await answerOnce(ctx, req, res, async (tx) => {
+        const saved = await tx.getRepository(Machine).save({ ...input, shopId: req.member.shopId });
+        return { status: 201, body: { machine: toMachineView(saved) } };
+      });
     },
   },
   {
