@@ -1,15 +1,13 @@
 import { useRouter } from 'expo-router';
-import { Formik } from 'formik';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { forgotPasswordSchema } from '@shared/auth/schemas';
 import { Button } from '@/components/ui/button';
-import { FormError } from '@/components/ui/form-error';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
+import { AuthForm } from '@/features/auth/components/auth-form';
 import { AuthFrame } from '@/features/auth/components/auth-frame';
 import { useForgotPassword } from '@/hooks/use-auth';
-import { showServerError } from '@/lib/form-errors';
 import { space } from '@/lib/theme';
 
 export function ForgotPasswordScreen() {
@@ -32,42 +30,19 @@ export function ForgotPasswordScreen() {
           <Button testID="forgot-password-back" label="Back to sign in" variant="primary" onPress={() => router.replace('/sign-in')} />
         </View>
       ) : (
-        <Formik
+        <AuthForm
           initialValues={{ email: '' }}
-          validationSchema={forgotPasswordSchema}
-          onSubmit={async (values, helpers) => {
-            helpers.setStatus(undefined);
-            const input = forgotPasswordSchema.cast(values);
-            try {
-              await forgot.trigger(input);
-              setSentTo(input.email);
-            } catch (error) {
-              showServerError(error, helpers);
-            }
+          schema={forgotPasswordSchema}
+          onSubmit={async (values) => {
+            await forgot.trigger(values);
+            setSentTo(values.email);
           }}
+          submitLabel="Send the link"
+          submitTestID="forgot-password-submit"
+          footer={<Button testID="forgot-password-cancel" label="Back to sign in" variant="quiet" onPress={() => router.replace('/sign-in')} />}
         >
-          {({ handleSubmit, isSubmitting, status }) => (
-            <View style={styles.form}>
-              <FormError message={status} />
-              <TextField
-                name="email"
-                label="E-mail"
-                testID="forgot-password-email"
-                autoComplete="email"
-                keyboardType="email-address"
-                inputMode="email"
-              />
-              <Button
-                testID="forgot-password-submit"
-                label="Send the link"
-                variant="primary"
-                loading={isSubmitting}
-                onPress={() => handleSubmit()}
-              />
-              <Button testID="forgot-password-cancel" label="Back to sign in" variant="quiet" onPress={() => router.replace('/sign-in')} />
-            </View>
-          )}
-        </Formik>
+          <TextField name="email" label="E-mail" testID="forgot-password-email" autoComplete="email" keyboardType="email-address" inputMode="email" />
+        </AuthForm>
       )}
     </AuthFrame>
   );

@@ -1,5 +1,4 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
-import { Formik } from 'formik';
 import { StyleSheet, View } from 'react-native';
 import { ROLE_DUTIES, ROLE_LABELS } from '@shared/auth/roles';
 import { acceptInviteSchema, PASSWORD_MIN } from '@shared/auth/schemas';
@@ -9,9 +8,9 @@ import { FormError } from '@/components/ui/form-error';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
+import { AuthForm } from '@/features/auth/components/auth-form';
 import { AuthFrame } from '@/features/auth/components/auth-frame';
 import { useAcceptInvite, useInvitePreview } from '@/hooks/use-invites';
-import { showServerError } from '@/lib/form-errors';
 import { useSession } from '@/lib/session';
 import { space } from '@/lib/theme';
 
@@ -54,52 +53,30 @@ export function InviteScreen() {
           You&apos;ll sign in as <Text variant="bodyStrong">{email}</Text>.
         </Text>
       </View>
-      <Formik
+      <AuthForm
         initialValues={{ token, name: '', password: '' }}
-        validationSchema={acceptInviteSchema}
-        onSubmit={async (values, helpers) => {
-          helpers.setStatus(undefined);
-          try {
-            await startSession(await accept.trigger(acceptInviteSchema.cast(values)));
-            router.replace('/');
-          } catch (error) {
-            showServerError(error, helpers);
-          }
+        schema={acceptInviteSchema}
+        onSubmit={async (values) => {
+          await startSession(await accept.trigger(values));
+          router.replace('/');
         }}
+        submitLabel={`Join ${shopName}`}
+        submitTestID="invite-accept"
       >
-        {({ handleSubmit, isSubmitting, status }) => (
-          <View style={styles.form}>
-            <FormError message={status} />
-            <TextField
-              name="name"
-              label="Your name"
-              hint="As your shop will see it on diagnoses."
-              testID="invite-name"
-              autoComplete="name"
-            />
-            <TextField
-              name="password"
-              label="Choose a password"
-              hint={`At least ${PASSWORD_MIN} characters.`}
-              testID="invite-password"
-              autoComplete="new-password"
-              secret
-            />
-            <Button
-              testID="invite-accept"
-              label={`Join ${shopName}`}
-              variant="primary"
-              loading={isSubmitting}
-              onPress={() => handleSubmit()}
-            />
-          </View>
-        )}
-      </Formik>
+        <TextField name="name" label="Your name" hint="As your shop will see it on diagnoses." testID="invite-name" autoComplete="name" />
+        <TextField
+          name="password"
+          label="Choose a password"
+          hint={`At least ${PASSWORD_MIN} characters.`}
+          testID="invite-password"
+          autoComplete="new-password"
+          secret
+        />
+      </AuthForm>
     </AuthFrame>
   );
 }
 
 const styles = StyleSheet.create({
   offer: { gap: space.sm },
-  form: { gap: space.lg },
 });

@@ -1,5 +1,4 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
-import { Formik } from 'formik';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { PASSWORD_MIN, resetPasswordSchema } from '@shared/auth/schemas';
@@ -7,10 +6,10 @@ import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
+import { AuthForm } from '@/features/auth/components/auth-form';
 import { AuthFrame } from '@/features/auth/components/auth-frame';
 import { useResetPassword } from '@/hooks/use-auth';
 import { ApiError } from '@/lib/api';
-import { showServerError } from '@/lib/form-errors';
 import { space } from '@/lib/theme';
 
 export function ResetPasswordScreen() {
@@ -50,42 +49,27 @@ export function ResetPasswordScreen() {
 
   return (
     <AuthFrame testID="reset-password-screen" title="Choose a new password">
-      <Formik
+      <AuthForm
         initialValues={{ token, password: '' }}
-        validationSchema={resetPasswordSchema}
-        onSubmit={async (values, helpers) => {
-          helpers.setStatus(undefined);
-          try {
-            await reset.trigger(resetPasswordSchema.cast(values));
-            setDone(true);
-          } catch (error) {
-            setLinkSpent(error instanceof ApiError && error.code === 'invalid_token');
-            showServerError(error, helpers);
-          }
+        schema={resetPasswordSchema}
+        onSubmit={async (values) => {
+          await reset.trigger(values);
+          setDone(true);
         }}
+        onError={(error) => setLinkSpent(error instanceof ApiError && error.code === 'invalid_token')}
+        submitLabel="Save the new password"
+        submitTestID="reset-password-submit"
+        notice={linkSpent ? askAgain : null}
       >
-        {({ handleSubmit, isSubmitting, status }) => (
-          <View style={styles.form}>
-            <FormError message={status} />
-            {linkSpent ? askAgain : null}
-            <TextField
-              name="password"
-              label="New password"
-              hint={`At least ${PASSWORD_MIN} characters. A short sentence is easy to type and hard to guess.`}
-              testID="reset-password-password"
-              autoComplete="new-password"
-              secret
-            />
-            <Button
-              testID="reset-password-submit"
-              label="Save the new password"
-              variant="primary"
-              loading={isSubmitting}
-              onPress={() => handleSubmit()}
-            />
-          </View>
-        )}
-      </Formik>
+        <TextField
+          name="password"
+          label="New password"
+          hint={`At least ${PASSWORD_MIN} characters. A short sentence is easy to type and hard to guess.`}
+          testID="reset-password-password"
+          autoComplete="new-password"
+          secret
+        />
+      </AuthForm>
     </AuthFrame>
   );
 }

@@ -1,15 +1,11 @@
 import { Redirect, useRouter } from 'expo-router';
-import { Formik } from 'formik';
-import { StyleSheet, View } from 'react-native';
 import { signInSchema } from '@shared/auth/schemas';
 import { Button } from '@/components/ui/button';
-import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
+import { AuthForm } from '@/features/auth/components/auth-form';
 import { AuthFrame } from '@/features/auth/components/auth-frame';
 import { useSignIn } from '@/hooks/use-auth';
-import { showServerError } from '@/lib/form-errors';
 import { useSession } from '@/lib/session';
-import { space } from '@/lib/theme';
 
 export function SignInScreen() {
   const { session, startSession } = useSession();
@@ -20,50 +16,17 @@ export function SignInScreen() {
 
   return (
     <AuthFrame testID="sign-in-screen" title="Sign in" intro="Use the e-mail address your shop invited.">
-      <Formik
+      <AuthForm
         initialValues={{ email: '', password: '' }}
-        validationSchema={signInSchema}
-        onSubmit={async (values, helpers) => {
-          helpers.setStatus(undefined);
-          try {
-            await startSession(await signIn.trigger(signInSchema.cast(values)));
-          } catch (error) {
-            showServerError(error, helpers);
-          }
-        }}
+        schema={signInSchema}
+        onSubmit={async (values) => startSession(await signIn.trigger(values))}
+        submitLabel="Sign in"
+        submitTestID="sign-in-submit"
+        footer={<Button testID="sign-in-forgot" label="Forgot your password?" variant="quiet" onPress={() => router.push('/forgot-password')} />}
       >
-        {({ handleSubmit, isSubmitting, status }) => (
-          <View style={styles.form}>
-            <FormError message={status} />
-            <TextField
-              name="email"
-              label="E-mail"
-              testID="sign-in-email"
-              autoComplete="email"
-              keyboardType="email-address"
-              inputMode="email"
-            />
-            <TextField name="password" label="Password" testID="sign-in-password" autoComplete="current-password" secret />
-            <Button
-              testID="sign-in-submit"
-              label="Sign in"
-              variant="primary"
-              loading={isSubmitting}
-              onPress={() => handleSubmit()}
-            />
-            <Button
-              testID="sign-in-forgot"
-              label="Forgot your password?"
-              variant="quiet"
-              onPress={() => router.push('/forgot-password')}
-            />
-          </View>
-        )}
-      </Formik>
+        <TextField name="email" label="E-mail" testID="sign-in-email" autoComplete="email" keyboardType="email-address" inputMode="email" />
+        <TextField name="password" label="Password" testID="sign-in-password" autoComplete="current-password" secret />
+      </AuthForm>
     </AuthFrame>
   );
 }
-
-const styles = StyleSheet.create({
-  form: { gap: space.lg },
-});
