@@ -9,6 +9,7 @@ import { mailRoutes } from './mail/mail.routes';
 import { memberRoutes } from './members/members.routes';
 import { meterRoutes } from './meters/meters.routes';
 import { photoRoutes } from './photos/photos.routes';
+import { procedurePictureRoutes } from './procedure-pictures/procedure-pictures.routes';
 import { procedureRoutes } from './procedures/procedures.routes';
 import { reportRoutes } from './report/report.routes';
 import { commentRoutes } from './replays/comments.routes';
@@ -30,6 +31,7 @@ export const routeTable: readonly RouteDef[] = [
   ...jobRoutes,
   ...meterRoutes,
   ...procedureRoutes,
+  ...procedurePictureRoutes,
   ...diagnosisRoutes,
   ...photoRoutes,
   ...reportRoutes,

@@ -8,6 +8,7 @@ import { Machine } from '../machines/machine.entity';
 import { MailMessage } from '../mail/mail-message.entity';
 import { Meter } from '../meters/meter.entity';
 import { DiagnosisPhoto } from '../photos/photo.entity';
+import { ProcedurePicture } from '../procedure-pictures/procedure-picture.entity';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
 import { Procedure } from '../procedures/procedure.entity';
 import { PracticeAttempt } from '../replays/practice-attempt.entity';
@@ -15,4 +16,4 @@ import { StepComment } from '../replays/step-comment.entity';
 import { Shop } from '../shops/shop.entity';
 import { User } from '../users/user.entity';
 
-export const entities = [Shop, User, Invite, PasswordReset, MailMessage, Machine, Job, Meter, Procedure, ProcedureVersion, Diagnosis, DiagnosisStep, IdempotencyRecord, DiagnosisPhoto, StepComment, PracticeAttempt];
+export const entities = [Shop, User, Invite, PasswordReset, MailMessage, Machine, Job, Meter, Procedure, ProcedureVersion, Diagnosis, DiagnosisStep, IdempotencyRecord, DiagnosisPhoto, StepComment, PracticeAttempt, ProcedurePicture];

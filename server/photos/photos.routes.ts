@@ -1,7 +1,4 @@
 import crypto from 'node:crypto';
-import { createReadStream } from 'node:fs';
-import fs from 'node:fs/promises';
-import { pipeline } from 'node:stream/promises';
 import { photoFieldsSchema, PHOTOS_PER_DIAGNOSIS } from '@shared/photos/schemas';
 import { DiagnosisStep } from '../diagnoses/diagnosis-step.entity';
 import { Diagnosis } from '../diagnoses/diagnosis.entity';
@@ -9,9 +6,10 @@ import { ApiError, notFound } from '../http/api-error';
 import type { RouteDef } from '../http/route';
 import { answerOnce } from '../idempotency/with-idempotency';
 import { DiagnosisPhoto } from './photo.entity';
-import { extensionOf, photoFile, removePhoto, storePhoto } from './photo-storage';
+import { removePhoto, storePhoto } from './photo-storage';
 import { toPhotoView } from './photo-views';
 import { receivePhoto } from './receive-photo';
+import { sendPicture } from './send-picture';
 
 export const photoRoutes: RouteDef[] = [
   {
@@ -72,18 +70,7 @@ export const photoRoutes: RouteDef[] = [
         relations: { diagnosis: true },
       });
       if (!photo || (req.member.role === 'apprentice' && photo.diagnosis.status !== 'concluded')) throw notFound('photo');
-      const file = photoFile(ctx.config.dataDir, photo.shopId, photo.storageKey);
-      const stat = await fs.stat(file).catch(() => null);
-      if (!stat) throw new ApiError(404, 'photo_missing', 'The picture is missing from the server’s data folder. Upload it again.');
-      res.set({
-        'Content-Type': photo.contentType,
-        'Content-Length': String(stat.size),
-        'Content-Disposition': `inline; filename="photo-${photo.id}.${extensionOf(photo.contentType)}"`,
-        'Cache-Control': 'private, max-age=86400',
-        'X-Content-Type-Options': 'nosniff',
-      });
-      // A client that stops reading ends the stream; there is nobody left to answer.
-      await pipeline(createReadStream(file), res).catch(() => res.destroy());
+      await sendPicture(res, ctx.config.dataDir, photo, 'photo');
     },
   },
 ];

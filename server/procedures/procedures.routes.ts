@@ -8,6 +8,7 @@ import type { CreateProcedureInput, PublishDraftInput } from '@shared/procedures
 import { Diagnosis } from '../diagnoses/diagnosis.entity';
 import { ApiError, notFound } from '../http/api-error';
 import type { AuthedRequest, RouteDef } from '../http/route';
+import { missingPictures, requireStoredPictures } from '../procedure-pictures/picture-references';
 import { User } from '../users/user.entity';
 import { ProcedureVersion } from './procedure-version.entity';
 import { Procedure } from './procedure.entity';
@@ -139,7 +140,8 @@ export const procedureRoutes: RouteDef[] = [
     summary: 'Import a procedure file (format probepath.procedure, version 1) as a new procedure with a draft; refused whole, with every error, when anything is wrong.',
     roles: AUTHORS,
     async handler(req, res, ctx) {
-      const file = readProcedureFile(req.body);
+      const read = readProcedureFile(req.body);
+      const file = read.ok ? await withStoredPictures(ctx, req.member.shopId, read) : read;
       if (!file.ok) {
         const shown = file.errors.slice(0, 5).join(' ');
         const more = file.errors.length > 5 ? ` (and ${file.errors.length - 5} more)` : '';
@@ -160,6 +162,7 @@ export const procedureRoutes: RouteDef[] = [
       const p = await findProcedure(req, ctx);
       const sent = (req.body as { document?: unknown }).document;
       const document = sent === undefined ? await latestDocument(ctx, p.id) : readDocument(sent);
+      await requireStoredPictures(ctx.ds.manager, req.member.shopId, document);
       const titles = await ctx.ds.getRepository(Procedure).find({ where: { shopId: req.member.shopId }, select: { title: true } });
       const meta = { title: copyTitle(p.title, titles.map((t) => t.title)), complaint: p.complaint, family: p.family };
       const { procedure, draft } = await createWithDraft(ctx, req, meta, document);
@@ -279,6 +282,7 @@ export const procedureRoutes: RouteDef[] = [
       const p = await findProcedure(req, ctx);
       const { revision } = req.body as { revision: number };
       const document = readDocument((req.body as { document: unknown }).document);
+      await requireStoredPictures(ctx.ds.manager, req.member.shopId, document);
       const saved = await ctx.write(async (tx) => {
         const repo = tx.getRepository(ProcedureVersion);
         const draft = await repo.findOneBy({ procedureId: p.id, status: 'draft' });
@@ -316,6 +320,7 @@ export const procedureRoutes: RouteDef[] = [
         const draft = await repo.findOneBy({ procedureId: p.id, status: 'draft' });
         if (!draft) throw new ApiError(404, 'no_draft', 'This procedure has no draft to publish.');
         if (draft.revision !== revision) throw staleDraft(draft.revision);
+        await requireStoredPictures(tx, p.shopId, draft.document);
         const problems = problemsOf(draft.document);
         if (problems.length) {
           throw new ApiError(422, 'invalid_procedure', `The draft has ${problems.length} problem${problems.length > 1 ? 's' : ''} to fix before it can be published.`, undefined, { problems });
@@ -351,6 +356,19 @@ async function latestDocument(ctx: Parameters<RouteDef['handler']>[2], procedure
   const v = (await repo.findOneBy({ procedureId, status: 'draft' })) ?? (await repo.findOne({ where: { procedureId, number: Not(IsNull()) }, order: { number: 'DESC' } }));
   if (!v) throw notFound('version');
   return v.document;
+}
+
+/** A file that reads well still needs its pictures in this shop: a procedure file names them but does not carry them. */
+async function withStoredPictures(ctx: Parameters<RouteDef['handler']>[2], shopId: string, file: Extract<ReturnType<typeof readProcedureFile>, { ok: true }>) {
+  const missing = await missingPictures(ctx.ds.manager, shopId, file.document);
+  if (!missing.length) return file;
+  return {
+    ok: false as const,
+    errors: [
+      'A procedure file names its pictures but does not carry them: import it into the shop it came from, or remove the pictures from those checks in the file and upload them again after importing.',
+      ...missing.map((m) => m.message),
+    ],
+  };
 }
 
 async function userNames(ctx: Parameters<RouteDef['handler']>[2], versions: ProcedureVersion[]) {

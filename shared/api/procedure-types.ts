@@ -45,3 +45,11 @@ export interface VersionDetail extends VersionSummary {
 export interface DraftDetail extends VersionDetail {
   problems: ValidationProblem[];
 }
+
+/** A picture uploaded for procedure checks; a check shows it with `{ src: id, alt }`. */
+export interface ProcedurePictureView {
+  id: string;
+  contentType: string;
+  size: number;
+  createdAt: string;
+}

@@ -1,4 +1,5 @@
 import * as yup from 'yup';
+import { PICTURE_ID } from '../procedures/pictures';
 import { CHECK_KINDS, MARGINAL_POLICIES, type ProcedureDocument } from './procedure';
 import { METER_FUNCTIONS, QUANTITIES } from './quantity';
 import { SPEC_KINDS, type SpecKind } from './spec';
@@ -83,7 +84,14 @@ const base = {
     .default(undefined),
   cautions: yup.array(requiredText('Caution', 500)).max(20, 'At most 20 cautions on a check.'),
   pictures: yup
-    .array(yup.object({ src: requiredText('Picture', 500), alt: requiredText('Picture description', 500) }).required())
+    .array(
+      yup
+        .object({
+          src: yup.string().strict().matches(PICTURE_ID, 'A picture is the id of a picture uploaded to this shop.').required('Say which picture.'),
+          alt: requiredText('Picture description', 500),
+        })
+        .required(),
+    )
     .max(20, 'At most 20 pictures on a check.'),
 };
 

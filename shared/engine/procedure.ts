@@ -44,7 +44,7 @@ export interface Probe {
 }
 
 export interface Picture {
-  /** Key of the stored image (diagram or photo). */
+  /** The id of a picture uploaded to the shop (see shared/procedures/pictures.ts). */
   src: string;
   /** What the picture shows, read aloud to those who can't see it. */
   alt: string;
