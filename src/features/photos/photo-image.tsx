@@ -4,12 +4,12 @@ import { useTheme } from '@/lib/theme';
 import type { PhotoImageProps } from './photo-image-props';
 
 /** On a phone the image view loads the photo itself, with the session's token in its request headers. */
-export function PhotoImage({ photoId, alt, width, height, fit = 'cover', testID }: PhotoImageProps) {
+export function PhotoImage({ path, alt, width, height, fit = 'cover', testID }: PhotoImageProps) {
   const colors = useTheme();
   return (
     <Image
       testID={testID}
-      source={{ uri: `/api/photos/${photoId}`, headers: authHeaders() }}
+      source={{ uri: path, headers: authHeaders() }}
       alt={alt}
       resizeMode={fit}
       style={[styles.image, { width, height, backgroundColor: fit === 'cover' ? colors.surfaceSunken : 'transparent' }]}

@@ -6,7 +6,7 @@ import { useTheme } from '@/lib/theme';
 import type { PhotoImageProps } from './photo-image-props';
 
 /** On the web a photo is fetched with the session's token and shown from a blob URL, released when it goes. */
-export function PhotoImage({ photoId, alt, width, height, fit = 'cover', testID }: PhotoImageProps) {
+export function PhotoImage({ path, alt, width, height, fit = 'cover', testID }: PhotoImageProps) {
   const colors = useTheme();
   const [url, setUrl] = useState<string | null>(null);
   const [failed, setFailed] = useState(false);
@@ -16,7 +16,7 @@ export function PhotoImage({ photoId, alt, width, height, fit = 'cover', testID 
     let gone = false;
     setUrl(null);
     setFailed(false);
-    apiRaw(`/api/photos/${photoId}`)
+    apiRaw(path)
       .then((r) => r.blob())
       .then((blob) => {
         if (gone) return;
@@ -28,7 +28,7 @@ export function PhotoImage({ photoId, alt, width, height, fit = 'cover', testID 
       gone = true;
       if (objectUrl) URL.revokeObjectURL(objectUrl);
     };
-  }, [photoId]);
+  }, [path]);
 
   const box = { width, height, backgroundColor: fit === 'cover' ? colors.surfaceSunken : 'transparent' };
   if (url) return <Image testID={testID} source={{ uri: url }} alt={alt} resizeMode={fit} style={[styles.image, box]} />;
@@ -36,7 +36,7 @@ export function PhotoImage({ photoId, alt, width, height, fit = 'cover', testID 
     <View testID={testID} role="img" aria-label={alt} style={[styles.image, styles.center, box]}>
       {failed ? (
         <Text variant="small" tone="textMuted" style={styles.failed}>
-          Photo could not load
+          Picture could not load
         </Text>
       ) : (
         <ActivityIndicator color={colors.textMuted} />

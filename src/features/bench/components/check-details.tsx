@@ -1,8 +1,7 @@
-import { useState } from 'react';
-import { Image, Modal, StyleSheet, View } from 'react-native';
-import type { Check, Picture } from '@shared/engine/procedure';
-import { Button } from '@/components/ui/button';
+import { StyleSheet, View } from 'react-native';
+import type { Check } from '@shared/engine/procedure';
 import { Heading, Text } from '@/components/ui/text';
+import { CheckPictures } from '@/features/procedures/components/check-pictures';
 import { radius, space, useTheme } from '@/lib/theme';
 import { CautionList } from './caution-list';
 import { meterSetting } from './meter-setting';
@@ -28,7 +27,7 @@ export function CheckDetails({ check, number }: { check: Check; number: number }
           {check.kind === 'measure' ? <MeterFacts check={check} /> : null}
         </View>
       ) : null}
-      {check.pictures?.length ? <Pictures pictures={check.pictures} /> : null}
+      <CheckPictures check={check} />
     </View>
   );
 }
@@ -58,29 +57,6 @@ function Fact({ label, value, mono = false }: { label: string; value: string; mo
   );
 }
 
-/** Diagrams and photos of the check; a tap opens one full size. */
-function Pictures({ pictures }: { pictures: Picture[] }) {
-  const colors = useTheme();
-  const [open, setOpen] = useState<Picture | null>(null);
-  return (
-    <View style={styles.pictures}>
-      {pictures.map((p) => (
-        <View key={p.src} style={[styles.thumb, { borderColor: colors.border }]}>
-          <Image source={{ uri: p.src }} alt={p.alt} style={styles.thumbImage} resizeMode="cover" />
-          <Button testID={`picture-${p.src}`} variant="quiet" icon="plus" label="Enlarge" ariaLabel={`Enlarge: ${p.alt}`} onPress={() => setOpen(p)} />
-        </View>
-      ))}
-      <Modal visible={open !== null} transparent animationType="fade" onRequestClose={() => setOpen(null)}>
-        <View style={[styles.viewer, { backgroundColor: colors.chrome }]}>
-          {open ? <Image source={{ uri: open.src }} alt={open.alt} style={styles.full} resizeMode="contain" /> : null}
-          <Text tone="onChrome">{open?.alt}</Text>
-          <Button testID="picture-close" variant="primary" label="Close" onPress={() => setOpen(null)} />
-        </View>
-      </Modal>
-    </View>
-  );
-}
-
 const styles = StyleSheet.create({
   wrap: { gap: space.lg },
   titles: { gap: space.xs },
@@ -88,9 +64,4 @@ const styles = StyleSheet.create({
   fact: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.md },
   factLabel: { width: 92, paddingTop: 2 },
   factValue: { flex: 1, minWidth: 160 },
-  pictures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
-  thumb: { width: 160, borderWidth: 1, borderRadius: radius.md, overflow: 'hidden' },
-  thumbImage: { width: '100%', height: 120 },
-  viewer: { flex: 1, padding: space.xl, gap: space.lg, alignItems: 'center', justifyContent: 'center' },
-  full: { width: '100%', flex: 1 },
 });

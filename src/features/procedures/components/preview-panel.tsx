@@ -13,6 +13,7 @@ import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { Heading, Text } from '@/components/ui/text';
 import { VerdictChip, VerdictPanel } from '@/components/verdict/verdict-mark';
+import { CheckPictures } from '@/features/procedures/components/check-pictures';
 import { radius, space, type, useTheme } from '@/lib/theme';
 
 /**
@@ -119,6 +120,7 @@ function CurrentCheck({ document, check, steps, number, titleOf, onGo }: Current
             .join(' · ')}
         </Text>
       ) : null}
+      <CheckPictures check={check} size={{ width: 128, height: 96 }} testID="preview-pictures" />
       {[...(number === 1 ? document.cautions : []), ...(check.cautions ?? [])].map((c, i) => (
         <View key={i} style={[styles.caution, { backgroundColor: colors.warningSoft, borderLeftColor: colors.warning }]}>
           <Text>{c}</Text>

@@ -11,6 +11,7 @@ import { Icon } from '@/components/ui/icon';
 import { Heading, Text } from '@/components/ui/text';
 import { SpecBar } from '@/components/spec-bar/spec-bar';
 import { VerdictPanel } from '@/components/verdict/verdict-mark';
+import { CheckPictures } from '@/features/procedures/components/check-pictures';
 import { formatDuration } from '@/features/replays/replay-path';
 import { formatDateTime } from '@/lib/format';
 import { radius, space, type, useTheme } from '@/lib/theme';
@@ -56,6 +57,7 @@ export function StepPanel({ step, check, position, total, spentMs, earlier, mete
       </Heading>
       <Text>{check.instruction}</Text>
       <Probe check={check} />
+      <CheckPictures check={check} testID="replay-check-pictures" />
       {check.cautions?.length ? (
         <View style={[styles.cautions, { backgroundColor: c.warningSoft, borderLeftColor: c.warning }]}>
           {check.cautions.map((caution) => (
