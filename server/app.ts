@@ -3,11 +3,11 @@ import compression from 'compression';
 import express, { type RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import helmet from 'helmet';
-import { pinoHttp } from 'pino-http';
 import type { AppContext } from './app-context';
 import { authenticate } from './http/authenticate';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import type { AuthedRequest, RouteDef } from './http/route';
+import { useRequestLog } from './http/request-log';
 import { validateBody } from './http/validate';
 import { routeTable } from './route-table';
 import { serveWeb } from './web/serve-web';
@@ -27,7 +27,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   app.disable('x-powered-by');
   app.set('trust proxy', false);
   app.set('query parser', 'simple');
-  app.use(pinoHttp({ logger: ctx.log, autoLogging: { ignore: (req) => !req.url?.startsWith('/api/') } }));
+  useRequestLog(app, ctx.log);
   app.use(
     helmet({
       contentSecurityPolicy: {
