@@ -9,6 +9,11 @@ interface Claims {
   shop: string;
 }
 
+/** What a valid session token says: the member, their shop, and when it expires (seconds since 1970). */
+export interface SessionClaims extends Claims {
+  exp: number;
+}
+
 export function issueSession(ctx: AppContext, user: User & { shop: { name: string } }): SignInResponse {
   const token = jwt.sign({ shop: user.shopId } satisfies Omit<Claims, 'sub'>, ctx.jwtKey, {
     subject: user.id,
@@ -20,11 +25,11 @@ export function issueSession(ctx: AppContext, user: User & { shop: { name: strin
 }
 
 /** Returns the claims, or null for a missing, tampered, expired or malformed token. */
-export function readSessionToken(ctx: AppContext, token: string): Claims | null {
+export function readSessionToken(ctx: AppContext, token: string): SessionClaims | null {
   try {
     const claims = jwt.verify(token, ctx.jwtKey, { algorithms: ['HS256'] });
-    if (typeof claims !== 'object' || typeof claims.sub !== 'string' || typeof claims.shop !== 'string') return null;
-    return { sub: claims.sub, shop: claims.shop };
+    if (typeof claims !== 'object' || typeof claims.sub !== 'string' || typeof claims.shop !== 'string' || typeof claims.exp !== 'number') return null;
+    return { sub: claims.sub, shop: claims.shop, exp: claims.exp };
   } catch {
     return null;
   }

@@ -2,13 +2,13 @@ import type Database from 'better-sqlite3';
 import type { RequestHandler } from 'express';
 import type { Role } from '@shared/auth/roles';
 import type { AppContext } from '../app-context';
-import { readSessionToken } from '../auth/session-token';
 import { dateFromSql } from '../db/sql-values';
 import { sqliteOf } from '../db/writer';
 import { Shop } from '../shops/shop.entity';
 import { User } from '../users/user.entity';
 import { ApiError } from './api-error';
 import type { AuthedRequest } from './route';
+import { verifySessionToken } from './verified-tokens';
 
 interface MemberRow {
   id: string;
@@ -40,15 +40,16 @@ function toUser(row: MemberRow): User {
 }
 
 /**
- * Checks the bearer token, then loads the member on every request so a role
- * change or a deactivation takes effect at once.
+ * Checks the bearer token (its signature once per token, see
+ * verifySessionToken), then loads the member on every request so a role change
+ * or a deactivation takes effect at once.
  */
 export function authenticate(ctx: AppContext, roles: readonly Role[]): RequestHandler {
   return (req, _res, next) => {
     const header = req.get('authorization') ?? '';
     const match = /^Bearer ([A-Za-z0-9._-]{10,2000})$/.exec(header);
     if (!match) throw new ApiError(401, 'unauthenticated', 'Sign in to continue.');
-    const claims = readSessionToken(ctx, match[1]);
+    const claims = verifySessionToken(ctx, match[1]);
     if (!claims) throw new ApiError(401, 'invalid_token', 'Your session has expired or is not valid. Sign in again.');
     const row = memberLookup(ctx).get(claims.sub) as MemberRow | undefined;
     if (!row || row.shopId !== claims.shop) {
