@@ -45,3 +45,4 @@ export type ConcludeInput = yup.InferType<typeof concludeSchema>;
 export const abandonSchema = yup.object({
   reason: text('The reason', 1000).required('Say why the diagnosis stops here.'),
 });
+export type AbandonInput = yup.InferType<typeof abandonSchema>;

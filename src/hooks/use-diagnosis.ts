@@ -1,7 +1,7 @@
 import useSWR from 'swr';
 import useSWRMutation from 'swr/mutation';
 import type { ConclusionView, DiagnosisDetail } from '@shared/api/diagnosis-types';
-import type { ConcludeInput, StartDiagnosisInput } from '@shared/diagnosis/schemas';
+import type { AbandonInput, ConcludeInput, StartDiagnosisInput } from '@shared/diagnosis/schemas';
 import { api, type ApiError } from '@/lib/api';
 
 export const diagnosisKey = (id: string) => `/api/diagnoses/${id}`;
@@ -29,5 +29,13 @@ export function useConcludeDiagnosis(id: string) {
   return useSWRMutation<{ status: 'concluded'; conclusion: ConclusionView }, ApiError, string, { input: ConcludeInput; key: string }>(
     diagnosisKey(id),
     (path, { arg }) => api(`${path}/conclude`, 'POST', arg.input, { idempotencyKey: arg.key }),
+  );
+}
+
+/** Stops a diagnosis without a finding; the diagnosis is fetched again afterwards and shows as stopped. */
+export function useAbandonDiagnosis(id: string) {
+  return useSWRMutation<{ status: 'abandoned' }, ApiError, string, { input: AbandonInput; key: string }>(
+    diagnosisKey(id),
+    (path, { arg }) => api(`${path}/abandon`, 'POST', arg.input, { idempotencyKey: arg.key }),
   );
 }

@@ -233,6 +233,43 @@ describe.each(Object.keys(SIZES) as Size[])('at %s size', (size) => {
     await context.close();
   });
 
+  it('a technician stops a diagnosis without a finding, after a second press and with the reason', async () => {
+    const tech = await apiAs(server.url, demo('tech').email, DEMO_PASSWORD);
+    const { procedures } = await tech<{ procedures: { id: string; latestPublished: number | null }[] }>('/api/procedures');
+    const { jobs } = await tech<{ jobs: { id: string }[] }>('/api/jobs');
+    const { meters } = await tech<{ meters: { id: string }[] }>('/api/meters');
+    const procedure = procedures.find((p) => p.latestPublished)!;
+    const { diagnosis } = await tech<{ diagnosis: DiagnosisDetail }>('/api/diagnoses', {
+      method: 'POST',
+      body: { procedureId: procedure.id, jobId: jobs[0].id, meterId: meters[0].id, ambientC: 19 },
+    });
+
+    const { context, page } = await openPage(browser, server.url, size);
+    await signIn(page, demo('tech').email, DEMO_PASSWORD, 'bench');
+    await page.goto(`/bench/diagnosis/${diagnosis.id}`);
+    await page.getByTestId('check-title').waitFor();
+    if (size === 'phone') await page.getByTestId('toggle-path').click();
+    await page.getByTestId('stop-diagnosis').click();
+    // Nothing stops on the first press, nor without a reason.
+    await page.getByTestId('stop-confirm').click();
+    await page.getByTestId('stop-diagnosis-form').getByText('Say why the diagnosis stops here.').waitFor();
+    expect((await tech<{ diagnosis: DiagnosisDetail }>(`/api/diagnoses/${diagnosis.id}`)).diagnosis.status).toBe('open');
+    await page.getByTestId('stop-reason').fill('Customer collected the machine before the pulse coil test.');
+    await shot(page, size, 'bench-stop', page.getByTestId('stop-diagnosis-form'));
+    await expectAccessible(page, 'stop a diagnosis');
+    await page.getByTestId('stop-confirm').click();
+    await page.getByTestId('abandoned').getByText('Customer collected the machine before the pulse coil test.').waitFor();
+    await shot(page, size, 'bench-stopped');
+    await page.getByTestId('abandoned').getByTestId('open-report').click();
+    await page.waitForURL(`**/report/${diagnosis.id}`);
+    await page.getByTestId('report-paper').getByText('Customer collected the machine before the pulse coil test.').first().waitFor();
+
+    const after = (await tech<{ diagnosis: DiagnosisDetail }>(`/api/diagnoses/${diagnosis.id}`)).diagnosis;
+    expect(after.status).toBe('abandoned');
+    expect(after.abandonReason).toBe('Customer collected the machine before the pulse coil test.');
+    await context.close();
+  });
+
   it('the bench says what it is waiting for, what went wrong and what to do, and has a designed empty state', async () => {
     const { context, page } = await openPage(browser, server.url, size);
     await signIn(page, demo('tech').email, DEMO_PASSWORD, 'bench');

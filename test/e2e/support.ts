@@ -92,7 +92,10 @@ export async function navSections(page: Page): Promise<string[]> {
   return ids.filter((id) => id !== 'account');
 }
 
-/** Calls the API as a signed-in member, e.g. to read the owner's outbox. */
+/**
+ * Calls the API as a signed-in member, e.g. to read the owner's outbox or to set a scene up; GET unless a
+ * method is given. A refused call throws with the server's answer, so a broken setup is plain to see.
+ */
 export async function apiAs(baseURL: string, email: string, password: string) {
   const signInResponse = await fetch(`${baseURL}/api/auth/sign-in`, {
     method: 'POST',
@@ -100,8 +103,13 @@ export async function apiAs(baseURL: string, email: string, password: string) {
     body: JSON.stringify({ email, password }),
   });
   const { token } = (await signInResponse.json()) as { token: string };
-  return async <T>(pathname: string): Promise<T> => {
-    const response = await fetch(`${baseURL}${pathname}`, { headers: { Authorization: `Bearer ${token}` } });
+  return async <T>(pathname: string, write?: { method: 'POST' | 'PUT' | 'PATCH' | 'DELETE'; body?: object }): Promise<T> => {
+    const response = await fetch(`${baseURL}${pathname}`, {
+      method: write?.method ?? 'GET',
+      headers: { Authorization: `Bearer ${token}`, ...(write?.body ? { 'Content-Type': 'application/json' } : {}) },
+      body: write?.body ? JSON.stringify(write.body) : undefined,
+    });
+    if (!response.ok) throw new Error(`${write?.method ?? 'GET'} ${pathname}: ${response.status} ${await response.text()}`);
     return (await response.json()) as T;
   };
 }

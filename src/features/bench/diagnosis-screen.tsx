@@ -14,6 +14,7 @@ import { ClosedDiagnosis } from './components/closed-diagnosis';
 import { DiagnosisHeader } from './components/diagnosis-header';
 import { PathList } from './components/path-list';
 import { StepPhotos } from './components/step-photos';
+import { StopDiagnosis } from './components/stop-diagnosis';
 import { SyncStatus } from './components/sync-status';
 import { useBenchDiagnosis } from './hooks/use-bench-diagnosis';
 import type { PathStep } from './offline/local-path';
@@ -69,6 +70,7 @@ export function DiagnosisScreen() {
       <PathList document={detail.document} local={local} onDismissNotRecorded={bench.dismissNotRecorded} stepExtras={photosOf} />
       <Heading level={3}>Cautions for this procedure</Heading>
       <CautionList cautions={detail.document.cautions} testID="path-cautions" />
+      {detail.status === 'open' ? <StopDiagnosis diagnosisId={detail.id} waiting={local.pendingCount} /> : null}
     </ScrollView>
   );
 

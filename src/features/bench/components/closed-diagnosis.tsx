@@ -36,9 +36,12 @@ export function ClosedDiagnosis({ detail, local, stepExtras }: { detail: Diagnos
         </Card>
       ) : (
         <Card testID="abandoned">
-          <Heading level={2}>Abandoned</Heading>
+          <Heading level={2}>Stopped without a finding</Heading>
           <Text>{detail.abandonReason}</Text>
-          <Button testID="back-to-bench" icon="bench" label="My bench" onPress={() => router.navigate('/bench')} style={styles.grow} />
+          <View style={styles.actions}>
+            <Button testID="open-report" icon="report" label="Open the report" onPress={() => router.push(`/report/${detail.id}`)} style={styles.grow} />
+            <Button testID="back-to-bench" icon="bench" label="My bench" onPress={() => router.navigate('/bench')} style={styles.grow} />
+          </View>
         </Card>
       )}
       <Heading level={2}>Path</Heading>
