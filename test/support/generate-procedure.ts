@@ -8,6 +8,7 @@ import type {
 } from '@shared/engine/procedure';
 import { QUANTITY_INFO, type Quantity } from '@shared/engine/quantity';
 import type { Spec } from '@shared/engine/spec';
+import { seededRandom } from '@shared/random/seeded-random';
 
 /**
  * Well-formed random procedures for property tests and the validation benchmark. Checks are created in
@@ -22,18 +23,6 @@ export interface GenerateOptions {
   seed: number;
   /** Include re-test loops (default true). */
   loops?: boolean;
-}
-
-/** Small fast PRNG (mulberry32): the same seed gives the same procedure in tests and the bench. */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
 }
 
 /** An outcome not yet pointed anywhere: `assign` sets its target. */

@@ -5,7 +5,6 @@ import type { Evaluation } from '@shared/engine/evaluate';
 import type { ProcedureDocument } from '@shared/engine/procedure';
 import type { Verdict } from '@shared/engine/verdict';
 import type { MeterRange } from '@shared/workshop/schemas';
-import type { DemoJobKey } from './machines-and-jobs';
 import type { DemoMeterKey } from './meters';
 import type { DemoProcedureKey } from './procedures';
 import type { When } from './time';
@@ -44,7 +43,9 @@ export interface DemoConclusion {
 export interface DemoDiagnosis {
   key: string;
   procedure: DemoProcedureKey;
-  job: DemoJobKey;
+  /** The procedure version run, by number; the newest published one when absent. */
+  version?: number;
+  job: string;
   meter: DemoMeterKey;
   by: Role;
   ambientC: number;

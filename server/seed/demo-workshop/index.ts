@@ -9,6 +9,7 @@ import { ProcedureVersion } from '../../procedures/procedure-version.entity';
 import { Procedure } from '../../procedures/procedure.entity';
 import type { User } from '../../users/user.entity';
 import { DEMO_DIAGNOSES, replayDiagnosis } from './diagnoses';
+import { generateDemoDiagnoses } from './generate-diagnoses';
 import { DEMO_JOBS } from './machines-and-jobs';
 import { DEMO_METERS } from './meters';
 import { DEMO_PROCEDURES } from './procedures';
@@ -16,7 +17,8 @@ import { addMinutes, daysBefore, resolveWhen } from './time';
 
 /**
  * The demo shop's workshop content: meters, machines and jobs, five published procedures with a version
- * history and a draft, three concluded diagnoses and one in progress. Everything is invented for the demo.
+ * history and a draft, three hand-written concluded diagnoses and one in progress, and dozens of concluded
+ * diagnoses generated from invented faults (generate-diagnoses.ts). Everything is invented for the demo.
  * Runs inside the seed's transaction; a shop that already has procedures is left alone.
  */
 export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, users: Record<Role, User>, now: Date = new Date()): Promise<void> {
@@ -31,7 +33,8 @@ export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, 
   }
 
   const jobs = new Map<string, Job>();
-  for (const j of DEMO_JOBS) {
+  const generated = generateDemoDiagnoses();
+  for (const j of [...DEMO_JOBS, ...generated.jobs]) {
     const booked = resolveWhen(now, j.booked);
     const machine = await tx.getRepository(Machine).save({ shopId, ...j.machine, createdAt: booked });
     const job = await tx.getRepository(Job).save({
@@ -49,6 +52,8 @@ export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, 
 
   /** The version a new diagnosis would have run on each procedure: its newest published one. */
   const running = new Map<string, ProcedureVersion>();
+  /** Every numbered version, by procedure and number, for diagnoses run on an older one. */
+  const numbered = new Map<string, ProcedureVersion>();
   for (const p of DEMO_PROCEDURES) {
     const procedure = await tx.getRepository(Procedure).save({
       shopId,
@@ -77,11 +82,12 @@ export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, 
         updatedAt: retiredAt ?? at,
       });
       if (v.status === 'published') running.set(p.key, saved);
+      if (!draft) numbered.set(`${p.key}#${number}`, saved);
     }
   }
 
-  for (const d of DEMO_DIAGNOSES) {
-    const version = running.get(d.procedure)!;
+  for (const d of [...DEMO_DIAGNOSES, ...generated.diagnoses]) {
+    const version = d.version === undefined ? running.get(d.procedure)! : numbered.get(`${d.procedure}#${d.version}`)!;
     const meter = meters.get(d.meter)!;
     const job = jobs.get(d.job)!;
     const by = users[d.by];

@@ -19,7 +19,8 @@ export interface DemoMachine {
 }
 
 export interface DemoJob {
-  key: DemoJobKey;
+  /** A hand-written story's job, or a generated one. */
+  key: DemoJobKey | `generated-${number}`;
   machine: DemoMachine;
   customerName: string;
   customerContact: string;
