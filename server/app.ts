@@ -2,12 +2,12 @@ import path from 'node:path';
 import compression from 'compression';
 import express, { type RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
-import helmet from 'helmet';
 import type { AppContext } from './app-context';
 import { authenticate } from './http/authenticate';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import type { AuthedRequest, RouteDef } from './http/route';
 import { useRequestLog } from './http/request-log';
+import { securityHeaders } from './http/security-headers';
 import { validateBody } from './http/validate';
 import { routeTable } from './route-table';
 import { serveWeb } from './web/serve-web';
@@ -29,7 +29,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   app.set('query parser', 'simple');
   useRequestLog(app, ctx.log);
   app.use(
-    helmet({
+    securityHeaders({
       contentSecurityPolicy: {
         directives: {
           'default-src': ["'self'"],
@@ -42,7 +42,9 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
       },
     }),
   );
-  app.use(compression());
+  // Write answers are a few hundred bytes, under compression's threshold; lists, documents and the web build are read with GET.
+  const compress = compression();
+  app.use((req, res, next) => (req.method === 'GET' || req.method === 'HEAD' ? compress(req, res, next) : next()));
   app.use('/api', express.json({ limit: BODY_LIMIT, strict: true }));
 
   const limits = options.rateLimit ?? { windowMs: 15 * 60 * 1000, limit: 10 };
