@@ -19,6 +19,11 @@ export function useImportProcedure() {
   return useSWRMutation<{ procedure: ProcedureSummary }, ApiError, string, unknown>(KEY, (path, { arg }) => api(`${path}/import`, 'POST', arg));
 }
 
+/** Duplicate a procedure: a new one whose draft copies its draft, else its latest version. */
+export function useDuplicateProcedure() {
+  return useSWRMutation<{ procedure: ProcedureSummary }, ApiError, string, string>(KEY, (path, { arg: id }) => api(`${path}/${id}/copy`, 'POST', {}));
+}
+
 export function useProcedure(id: string | undefined) {
   return useSWR<{ procedure: ProcedureDetail }, ApiError>(id ? `${KEY}/${id}` : null);
 }

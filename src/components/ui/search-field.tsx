@@ -3,8 +3,18 @@ import { StyleSheet, TextInput, View } from 'react-native';
 import { Text } from '@/components/ui/text';
 import { radius, space, type, useTheme } from '@/lib/theme';
 
-/** A labelled text input that narrows a list as you type (not part of a form). */
-export function SearchField({ label, value, onChange, placeholder, testID }: { label: string; value: string; onChange: (text: string) => void; placeholder?: string; testID: string }) {
+interface SearchFieldProps {
+  label: string;
+  value: string;
+  onChange: (text: string) => void;
+  placeholder?: string;
+  testID: string;
+  /** Called on Enter, for a field whose value is acted on rather than only narrowing a list. */
+  onSubmit?: () => void;
+}
+
+/** A labelled text input outside any form that narrows a list as you type: searches and filters. */
+export function SearchField({ label, value, onChange, placeholder, testID, onSubmit }: SearchFieldProps) {
   const colors = useTheme();
   const [focused, setFocused] = useState(false);
   return (
@@ -18,6 +28,7 @@ export function SearchField({ label, value, onChange, placeholder, testID }: { l
         role="searchbox"
         value={value}
         onChangeText={onChange}
+        onSubmitEditing={onSubmit}
         placeholder={placeholder}
         placeholderTextColor={colors.textMuted}
         autoCorrect={false}

@@ -3,19 +3,19 @@ import { StyleSheet, View } from 'react-native';
 import { CHECK_KINDS, type ProcedureDocument } from '@shared/engine/procedure';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
-import { PlainField } from '@/features/procedures/components/search-field';
+import { SearchField } from '@/components/ui/search-field';
 import { space } from '@/lib/theme';
 
 const GROUP_TITLES = { measure: 'Measurements', observe: 'Observations', task: 'Tasks', finding: 'Findings' } as const;
 
-/** The checks grouped by kind, filterable by title or id; the selected one is marked. */
+/** The checks grouped by kind, filterable by title or id (Enter selects the first match); the selected one is marked. */
 export function CheckList({ document, selectedId, flagged, onSelect }: { document: ProcedureDocument; selectedId: string | null; flagged: ReadonlySet<string>; onSelect: (id: string) => void }) {
   const [filter, setFilter] = useState('');
   const words = filter.trim().toLowerCase();
   const shown = document.checks.filter((c) => !words || `${c.title} ${c.id}`.toLowerCase().includes(words));
   return (
     <View style={styles.list} testID="check-list">
-      <PlainField label="Filter checks" value={filter} onChange={setFilter} testID="check-filter" />
+      <SearchField label="Filter checks" value={filter} onChange={setFilter} onSubmit={() => shown[0] && onSelect(shown[0].id)} testID="check-filter" />
       {CHECK_KINDS.map((kind) => {
         const checks = shown.filter((c) => c.kind === kind);
         if (!checks.length) return null;
