@@ -39,6 +39,25 @@ export interface CheckFormValues {
   action: string;
   /** An observation's choices; where each leads is edited with the outcomes. */
   choices: ChoiceValues[];
+  /** The check's pictures in the order shown: an uploaded picture's id and what it shows. */
+  pictures: PictureValues[];
+}
+
+export interface PictureValues {
+  src: string;
+  alt: string;
+}
+
+/** The engine's procedure schema allows at most this many pictures on one check. */
+export const MAX_PICTURES = 20;
+
+/** The pictures with the one at `index` moved one place up (-1) or down (+1); unchanged at either end. */
+export function movePicture(pictures: readonly PictureValues[], index: number, by: -1 | 1): PictureValues[] {
+  const to = index + by;
+  if (index < 0 || index >= pictures.length || to < 0 || to >= pictures.length) return [...pictures];
+  const next = [...pictures];
+  [next[index], next[to]] = [next[to], next[index]];
+  return next;
 }
 
 export interface ChoiceValues {
@@ -180,6 +199,15 @@ export const checkFormSchema = yup.object({
             return new Set(labels).size === labels.length;
           }),
     }),
+  pictures: yup
+    .array(
+      yup.object({
+        src: yup.string().required(),
+        alt: yup.string().trim().max(500, 'At most 500 characters.').required('Say what the picture shows, e.g. “Connector C3 from the wire side, pin 1 top left”.'),
+      }),
+    )
+    .max(MAX_PICTURES, `At most ${MAX_PICTURES} pictures on a check.`)
+    .required(),
 });
 
 const lines = (text: string) => text.split(/[\n|]/).map((l) => l.trim()).filter(Boolean);
@@ -228,6 +256,7 @@ export function formValuesOf(check: Check): CheckFormValues {
     part: check.kind === 'finding' ? check.finding.part : '',
     action: check.kind === 'finding' ? check.finding.action : '',
     choices: check.kind === 'observe' ? check.choices.map((c) => ({ id: c.id, label: c.label })) : [],
+    pictures: (check.pictures ?? []).map((p) => ({ src: p.src, alt: p.alt })),
   };
 }
 
@@ -248,7 +277,7 @@ export function checkFromForm(values: CheckFormValues, previous: Check): Check {
     instruction: values.instruction,
     ...(Object.keys(probe).length ? { probe } : {}),
     ...(cautions.length ? { cautions } : {}),
-    ...(previous.pictures ? { pictures: previous.pictures } : {}),
+    ...(values.pictures.length ? { pictures: values.pictures.map((p) => ({ src: p.src, alt: p.alt.trim() })) } : {}),
   };
   const onward = edgesOf(previous)[0]?.target ?? previous.id;
   const retest = previous.kind !== 'finding' && previous.retest ? { retest: previous.retest } : {};

@@ -8,6 +8,10 @@ import { createProcedureSchema } from './schemas';
  * Probepath's procedure file (documented in DEVELOPERS.md, "Procedure files"): one procedure version with
  * its title, complaint and family, as JSON. `formatVersion` changes whenever a reader of the old version
  * could misread the new one.
+ *
+ * Check pictures travel by id only (`pictures[].src` is the id of a picture stored in the shop), not as
+ * bytes: the importing server refuses a file showing a picture it doesn't store, naming each one, so a
+ * file taken to another shop never arrives with broken pictures.
  */
 export const PROCEDURE_FILE_FORMAT = 'probepath.procedure';
 export const PROCEDURE_FILE_VERSION = 1;

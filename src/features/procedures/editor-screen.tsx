@@ -236,7 +236,7 @@ function Editor({ procedureId, title, loaded, onCopied, onBack, onDraftStarted }
             <VersionsPanel procedureId={procedureId} onDraftStarted={onDraftStarted} onCompare={(before, after) => setComparing({ before, after })} />
           ) : selected ? (
             <>
-              <CheckFormPanel key={`${selected.id}:${editor.epoch}`} check={selected} document={document} onChange={(next, group) => editor.edit(replaceCheck(document, selected.id, next), group)} />
+              <CheckFormPanel key={`${selected.id}:${editor.epoch}`} procedureId={procedureId} check={selected} document={document} onChange={(next, group) => editor.edit(replaceCheck(document, selected.id, next), group)} />
               <OutcomesEditor check={selected} document={document} onEdit={(next) => editor.edit(next)} onSelect={setSelectedId} />
               <View style={styles.addRow}>
                 {selected.id !== document.startCheckId ? <Button testID="make-start" label="Make this the start" onPress={() => editor.edit(setStart(document, selected.id))} /> : null}

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkFormSchema, checkFromForm, formatExact, formValuesOf, newChoiceId } from '@shared/editor/check-form';
+import { checkFormSchema, checkFromForm, formatExact, formValuesOf, movePicture, newChoiceId } from '@shared/editor/check-form';
 import { fixtureProcedure } from '../../support/fixture-procedure';
 
 describe('check form', () => {
@@ -61,6 +61,33 @@ describe('check form', () => {
       // Other kinds carry no choices and are not asked for any.
       const coil = fixtureProcedure().checks[0];
       expect(checkFormSchema.isValidSync(formValuesOf(coil))).toBe(true);
+    });
+  });
+
+  describe('pictures', () => {
+    const A = { src: '0b6f1d52-8c1e-4f0a-9d3b-2a7c5e4f1a01', alt: 'Connector P1 from the wire side' };
+    const B = { src: '0b6f1d52-8c1e-4f0a-9d3b-2a7c5e4f1a02', alt: 'Where P1 sits under the seat' };
+    const coil = () => fixtureProcedure().checks[0];
+
+    it('keeps pictures in the order the form lists them, with trimmed descriptions, and drops the field when none are left', () => {
+      const withTwo = checkFromForm({ ...formValuesOf(coil()), pictures: [{ ...A, alt: `  ${A.alt} ` }, B] }, coil());
+      expect(withTwo.pictures).toEqual([A, B]);
+      expect(formValuesOf(withTwo).pictures).toEqual([A, B]);
+      const swapped = checkFromForm({ ...formValuesOf(withTwo), pictures: movePicture([A, B], 0, 1) }, withTwo);
+      expect(swapped.pictures).toEqual([B, A]);
+      const none = checkFromForm({ ...formValuesOf(withTwo), pictures: [] }, withTwo);
+      expect('pictures' in none).toBe(false);
+    });
+
+    it('moves a picture one place and leaves the ends alone', () => {
+      expect(movePicture([A, B], 1, -1)).toEqual([B, A]);
+      expect(movePicture([A, B], 0, -1)).toEqual([A, B]);
+      expect(movePicture([A, B], 1, 1)).toEqual([A, B]);
+    });
+
+    it('asks what a picture shows before it goes into the check', () => {
+      expect(() => checkFormSchema.validateSync({ ...formValuesOf(coil()), pictures: [{ ...A, alt: '   ' }] })).toThrow(/Say what the picture shows/);
+      expect(checkFormSchema.isValidSync({ ...formValuesOf(coil()), pictures: [A] })).toBe(true);
     });
   });
 });

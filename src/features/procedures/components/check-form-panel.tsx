@@ -10,17 +10,19 @@ import { FormError } from '@/components/ui/form-error';
 import { Heading, Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { ChipRow } from '@/features/procedures/components/chip-row';
+import { PictureFields } from '@/features/procedures/components/picture-fields';
 import { space } from '@/lib/theme';
 
 const words = (s: string) => s.replace(/_/g, ' ');
 
 /** The selected check as a form; every valid change goes into the draft at once (and so into undo and autosave). */
-export function CheckFormPanel({ check, document, onChange }: { check: Check; document: ProcedureDocument; onChange: (next: Check, group: string) => void }) {
+export function CheckFormPanel({ procedureId, check, document, onChange }: { procedureId: string; check: Check; document: ProcedureDocument; onChange: (next: Check, group: string) => void }) {
   return (
     <Formik<CheckFormValues> initialValues={formValuesOf(check)} validationSchema={checkFormSchema} validateOnMount onSubmit={() => undefined}>
       <View style={styles.form} testID="check-form">
         <Heading level={2}>Check “{check.id}”</Heading>
         <Fields document={document} check={check} />
+        <PictureFields procedureId={procedureId} checkTitle={check.title} />
         <Sync check={check} onChange={onChange} />
       </View>
     </Formik>
