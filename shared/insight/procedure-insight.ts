@@ -1,4 +1,4 @@
-import type { ProcedureDocument } from '../engine/procedure';
+import type { Check, ProcedureDocument } from '../engine/procedure';
 
 /**
  * What the concluded diagnoses of one procedure version say about it: how often each finding and each
@@ -118,39 +118,134 @@ export function procedureInsight(document: ProcedureDocument, diagnoses: readonl
     edges,
     checks,
     medianDiagnosisMs: median(durations),
-    expected: expectedToFinding(document.startCheckId, edges, new Map(checks.map((c) => [c.checkId, c.meanMs]))),
+    expected: expectedToFinding(document, edges, new Map(checks.map((c) => [c.checkId, c.meanMs]))),
     suggestion: orderSuggestion(checks),
   };
 }
 
+/** Augmented chains larger than this are not solved (the elimination is cubic); the expectation is left out. */
+const MAX_STATES = 1500;
+
 /**
- * Expected checks and time from `start` to a finding, treating the observed branch frequencies as the
+ * Expected checks and time from the start to a finding, treating the observed branch frequencies as the
  * probabilities of a Markov chain whose absorbing states are the checks with no observed way on (the
- * findings): N(c) = 1 + Σ p(c→d)·N(d) and T(c) = t(c) + Σ p(c→d)·T(d), solved exactly, so loops (a re-test
- * that sends the technician back) count as often as they happened. Null when `start` was never run.
+ * findings): N(s) = 1 + Σ p(s→u)·N(u) and T(s) = t(s) + Σ p(s→u)·T(u), solved exactly, so loops count as
+ * often as they happened. A re-test check runs at most `maxVisits` times; after that a step that would enter
+ * it goes to its `whenExhausted` check, as the engine walks it. So each state is a check together with how
+ * often each capped check on an observed loop has run so far, and a loop's probability only applies while
+ * it may still be taken. An observed step to a `whenExhausted` check that is not one of the check's own
+ * exits was a step into the exhausted re-test check, and is counted as that. Null when the first check
+ * never ran, or when the loops make too many states to solve.
  */
-export function expectedToFinding(start: string, edges: readonly EdgeCount[], meanMs: ReadonlyMap<string, number>): Expectation | null {
-  const out = new Map<string, EdgeCount[]>();
-  for (const e of edges) out.set(e.from, [...(out.get(e.from) ?? []), e]);
-  if (!out.has(start)) return null;
-  const states = [...out.keys()];
-  const index = new Map(states.map((s, i) => [s, i]));
-  const n = states.length;
-  // (I − P) x = b, one row per transient check; two right-hand sides: counts and times.
-  const a = states.map(() => new Array<number>(n).fill(0));
-  const b = states.map((s) => [1, meanMs.get(s) ?? 0]);
-  for (const [i, s] of states.entries()) {
-    a[i][i] += 1;
-    const leaving = out.get(s)!;
-    const total = leaving.reduce((sum, e) => sum + e.count, 0);
-    for (const e of leaving) {
-      const j = index.get(e.to);
-      if (j !== undefined) a[i][j] -= e.count / total;
-    }
+export function expectedToFinding(document: ProcedureDocument, edges: readonly EdgeCount[], meanMs: ReadonlyMap<string, number>): Expectation | null {
+  const byId = new Map(document.checks.map((c) => [c.id, c]));
+  const out = new Map<string, Map<string, number>>();
+  for (const e of edges) {
+    const to = intendedTarget(byId.get(e.from), e.to, byId);
+    const leaving = out.get(e.from) ?? new Map<string, number>();
+    leaving.set(to, (leaving.get(to) ?? 0) + e.count);
+    out.set(e.from, leaving);
   }
-  const x = solve(a, b);
-  const row = x[index.get(start)!];
-  return { checks: row[0], ms: row[1] };
+  const start = document.startCheckId;
+  if (!out.has(start)) return null;
+
+  // Only a re-test check on an observed loop can be entered again, so only those need their visits counted.
+  const capped = [...out.keys()].filter((id) => {
+    const c = byId.get(id);
+    return c && c.kind !== 'finding' && c.retest && onLoop(id, out);
+  });
+  const cap = (id: string) => {
+    const c = byId.get(id);
+    return c && c.kind !== 'finding' && c.retest ? c.retest : undefined;
+  };
+  const enter = (id: string, counts: readonly number[]) => {
+    const k = capped.indexOf(id);
+    if (k < 0) return counts;
+    const next = [...counts];
+    next[k] = Math.min(next[k] + 1, cap(id)!.maxVisits);
+    return next;
+  };
+
+  interface State {
+    checkId: string;
+    counts: readonly number[];
+  }
+  const keyOf = (s: State) => `${s.checkId}\u0000${s.counts.join(',')}`;
+  const first: State = { checkId: start, counts: enter(start, capped.map(() => 0)) };
+  const states: State[] = [first];
+  const index = new Map([[keyOf(first), 0]]);
+  const moves: { to: number; p: number }[][] = [];
+  for (let i = 0; i < states.length; i++) {
+    if (states.length > MAX_STATES) return null;
+    const { checkId, counts } = states[i];
+    const leaving = out.get(checkId)!;
+    const total = [...leaving.values()].reduce((a, b) => a + b, 0);
+    const row: { to: number; p: number }[] = [];
+    for (const [target, count] of leaving) {
+      const k = capped.indexOf(target);
+      const to = k >= 0 && counts[k] >= cap(target)!.maxVisits ? cap(target)!.whenExhausted : target;
+      if (!out.has(to)) continue; // a finding, or a check never seen to lead on: absorbing
+      const next: State = { checkId: to, counts: enter(to, counts) };
+      let j = index.get(keyOf(next));
+      if (j === undefined) {
+        j = states.length;
+        states.push(next);
+        index.set(keyOf(next), j);
+      }
+      row.push({ to: j, p: count / total });
+    }
+    moves.push(row);
+  }
+
+  // (I − P) x = b, one row per transient state; two right-hand sides: counts and times.
+  const n = states.length;
+  const a = states.map(() => new Array<number>(n).fill(0));
+  const b = states.map((s) => [1, meanMs.get(s.checkId) ?? 0]);
+  for (let i = 0; i < n; i++) {
+    a[i][i] += 1;
+    for (const m of moves[i]) a[i][m.to] -= m.p;
+  }
+  const [checks, ms] = solve(a, b)[0];
+  return { checks, ms };
+}
+
+/** The check a step meant to enter: a step to a `whenExhausted` check the check has no exit to entered the exhausted re-test check. */
+function intendedTarget(from: Check | undefined, to: string, byId: ReadonlyMap<string, Check>): string {
+  if (!from) return to;
+  const exits = exitsOf(from);
+  if (exits.includes(to)) return to;
+  const redirected = exits.find((x) => {
+    const c = byId.get(x);
+    return c && c.kind !== 'finding' && c.retest?.whenExhausted === to;
+  });
+  return redirected ?? to;
+}
+
+function exitsOf(c: Check): string[] {
+  switch (c.kind) {
+    case 'measure':
+      return Object.values(c.outcomes).filter((x): x is string => x !== undefined);
+    case 'observe':
+      return c.choices.map((x) => x.next);
+    case 'task':
+      return [c.next];
+    case 'finding':
+      return [];
+  }
+}
+
+/** Whether some observed path leads from `id` back to itself. */
+function onLoop(id: string, out: ReadonlyMap<string, ReadonlyMap<string, number>>): boolean {
+  const seen = new Set<string>();
+  const stack = [...(out.get(id)?.keys() ?? [])];
+  while (stack.length) {
+    const at = stack.pop()!;
+    if (at === id) return true;
+    if (seen.has(at)) continue;
+    seen.add(at);
+    stack.push(...(out.get(at)?.keys() ?? []));
+  }
+  return false;
 }
 
 /** Gauss–Jordan elimination with partial pivoting; `a` is non-singular because every state reaches a finding. */

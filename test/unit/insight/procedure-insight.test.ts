@@ -72,6 +72,23 @@ describe('procedureInsight', () => {
   });
 });
 
+/**
+ * A document in which each check leads to the listed checks (observations, one choice each) and every id
+ * without exits is a finding; `retest` caps a check as the engine does.
+ */
+function chain(start: string, exits: Record<string, string[]>, retest: Record<string, { maxVisits: number; whenExhausted: string }> = {}): ProcedureDocument {
+  const ids = new Set([start, ...Object.keys(exits), ...Object.values(exits).flat()]);
+  return {
+    startCheckId: start,
+    cautions: [],
+    checks: [...ids].map((id) =>
+      exits[id]
+        ? { id, kind: 'observe' as const, title: id, instruction: '', choices: exits[id].map((next) => ({ id: next, label: next, next })), ...(retest[id] ? { retest: retest[id] } : {}) }
+        : { id, kind: 'finding' as const, title: id, instruction: '', finding: { part: id, action: id } },
+    ),
+  };
+}
+
 describe('expectedToFinding', () => {
   it('counts a re-test loop as often as it happened: N = 1 / 0.8 + 1 = 2.25, T = 1.25·1 + 3 = 4.25 min', () => {
     // A sends the technician back to A one time in five (p = 0.2), else on to B; B always ends at F.
@@ -82,7 +99,7 @@ describe('expectedToFinding', () => {
       { from: 'A', to: 'B', count: 4 },
       { from: 'B', to: 'F', count: 4 },
     ];
-    const e = expectedToFinding('A', edges, new Map([['A', 1 * MIN], ['B', 3 * MIN]]))!;
+    const e = expectedToFinding(chain('A', { A: ['A', 'B'], B: ['F'] }), edges, new Map([['A', 1 * MIN], ['B', 3 * MIN]]))!;
     expect(e.checks).toBeCloseTo(2.25, 12);
     expect(e.ms / MIN).toBeCloseTo(4.25, 12);
   });
@@ -98,13 +115,58 @@ describe('expectedToFinding', () => {
       { from: 'C', to: 'F', count: 3 },
       { from: 'D', to: 'C', count: 1 },
     ];
-    const e = expectedToFinding('S', edges, new Map([['S', 2 * MIN], ['C', 1 * MIN], ['D', 4 * MIN]]))!;
+    const e = expectedToFinding(chain('S', { S: ['F', 'C', 'D'], C: ['F'], D: ['C'] }), edges, new Map([['S', 2 * MIN], ['C', 1 * MIN], ['D', 4 * MIN]]))!;
     expect(e.checks).toBeCloseTo(2, 12);
     expect(e.ms / MIN).toBeCloseTo(3.75, 12);
   });
 
   it('says nothing when the first check never ran', () => {
-    expect(expectedToFinding('A', [], new Map())).toBeNull();
+    expect(expectedToFinding(chain('A', { A: ['F'] }), [], new Map())).toBeNull();
+  });
+
+  it('stops a capped re-measure loop at its visit limit: N = 1 + ½·1 = 1.5, T = 4 + ½·4 = 6 min', () => {
+    // X measures again one time in two (X → X) or ends at F; X runs at most twice, then goes to F.
+    // Uncapped this would be N = 1 / (1 − ½) = 2. Capped: visit 1 goes on to visit 2 with p = ½; on visit 2
+    // the loop is used up, so both outcomes end at F: N = 1 + ½·1 = 1.5 checks, T = 4 + ½·4 = 6 minutes.
+    const doc = chain('X', { X: ['X', 'F'] }, { X: { maxVisits: 2, whenExhausted: 'F' } });
+    const edges = [
+      { from: 'X', to: 'X', count: 1 },
+      { from: 'X', to: 'F', count: 1 },
+    ];
+    const e = expectedToFinding(doc, edges, new Map([['X', 4 * MIN]]))!;
+    expect(e.checks).toBeCloseTo(1.5, 12);
+    expect(e.ms / MIN).toBeCloseTo(6, 12);
+  });
+
+  it('sends a loop through a task to the exhausted exit on the last pass: N = 3.352, T = 10.448 min', () => {
+    // A → W (p = 0.6, a task that sends the technician back to A) or A → F (0.4); A runs at most 3 times,
+    // then W goes on to G, and G → F2. Times A 2, W 5, G 3 min. Uncapped: N(A) = 1.6 / 0.4 = 4.
+    // Capped, by how often A has run (A1, A2, A3), with N(G) = 1 and T(G) = 3:
+    //   N(W|3) = 1 + N(G) = 2;       N(A3) = 1 + 0.6·2    = 2.2
+    //   N(W|2) = 1 + 2.2 = 3.2;      N(A2) = 1 + 0.6·3.2  = 2.92
+    //   N(W|1) = 1 + 2.92 = 3.92;    N(A1) = 1 + 0.6·3.92 = 3.352
+    //   T(W|3) = 5 + 3 = 8;          T(A3) = 2 + 0.6·8     = 6.8
+    //   T(W|2) = 5 + 6.8 = 11.8;     T(A2) = 2 + 0.6·11.8  = 9.08
+    //   T(W|1) = 5 + 9.08 = 14.08;   T(A1) = 2 + 0.6·14.08 = 10.448
+    // The one observed W → G was W entering the exhausted A, so W leads to A with p = 1.
+    const doc = chain('A', { A: ['W', 'F'], W: ['A'], G: ['F2'] }, { A: { maxVisits: 3, whenExhausted: 'G' } });
+    const edges = [
+      { from: 'A', to: 'W', count: 3 },
+      { from: 'A', to: 'F', count: 2 },
+      { from: 'W', to: 'A', count: 2 },
+      { from: 'W', to: 'G', count: 1 },
+      { from: 'G', to: 'F2', count: 1 },
+    ];
+    const e = expectedToFinding(doc, edges, new Map([['A', 2 * MIN], ['W', 5 * MIN], ['G', 3 * MIN]]))!;
+    expect(e.checks).toBeCloseTo(3.352, 12);
+    expect(e.ms / MIN).toBeCloseTo(10.448, 12);
+  });
+
+  it('leaves a capped check that is on no observed loop as it is: N = 1 + ½ = 1.5', () => {
+    // A (capped at 1 visit) → B or F, B → F: nothing returns to A, so the cap never bites.
+    const doc = chain('A', { A: ['B', 'F'], B: ['F'] }, { A: { maxVisits: 1, whenExhausted: 'F' } });
+    const e = expectedToFinding(doc, [{ from: 'A', to: 'B', count: 1 }, { from: 'A', to: 'F', count: 1 }, { from: 'B', to: 'F', count: 1 }], new Map())!;
+    expect(e.checks).toBeCloseTo(1.5, 12);
   });
 });
 
