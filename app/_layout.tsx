@@ -1,10 +1,11 @@
-import { useFonts } from 'expo-font';
+import { FontDisplay, useFonts } from 'expo-font';
 import { Slot } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
 import { SWRConfig } from 'swr';
 import { SplashScreen } from '@/features/shell/splash-screen';
 import '@/lib/focus-ring';
 import { ApiError, fetcher } from '@/lib/api';
+import { startEarlyRequests } from '@/lib/early-requests';
 import { SessionProvider } from '@/lib/session';
 import { fonts } from '@/lib/theme';
 
@@ -16,22 +17,27 @@ const swrConfig = {
   shouldRetryOnError: (error: Error) => !(error instanceof ApiError && error.status >= 400 && error.status < 500),
 };
 
+startEarlyRequests();
+
 export default function RootLayout() {
+  // The text faces (preloaded by the page) hold the first paint back; the reading face swaps in when it
+  // arrives, so it never delays a screen.
   const [loaded, failed] = useFonts({
     [fonts.regular]: require('../fonts/AtkinsonHyperlegibleNext-Regular.ttf'),
     [fonts.semiBold]: require('../fonts/AtkinsonHyperlegibleNext-SemiBold.ttf'),
     [fonts.bold]: require('../fonts/AtkinsonHyperlegibleNext-Bold.ttf'),
-    [fonts.mono]: require('../fonts/JetBrainsMono-Medium.ttf'),
-    [fonts.monoBold]: require('../fonts/JetBrainsMono-Bold.ttf'),
   });
-  // If a font fails to load, carry on in the system font rather than stay on the splash.
-  if (!loaded && !failed) return <SplashScreen />;
+  useFonts({
+    [fonts.mono]: { uri: require('../fonts/JetBrainsMono-Medium.ttf'), display: FontDisplay.SWAP },
+    [fonts.monoBold]: { uri: require('../fonts/JetBrainsMono-Bold.ttf'), display: FontDisplay.SWAP },
+  });
 
   return (
     <SWRConfig value={swrConfig}>
       <SessionProvider>
         <StatusBar style="auto" />
-        <Slot />
+        {/* If a font fails to load, carry on in the system font rather than stay on the splash. */}
+        {loaded || failed ? <Slot /> : <SplashScreen />}
       </SessionProvider>
     </SWRConfig>
   );

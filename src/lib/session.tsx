@@ -70,6 +70,10 @@ export function SessionProvider({ children }: { children: ReactNode }) {
     setUnauthorizedHandler(() => void signOut());
     return () => setUnauthorizedHandler(null);
   }, [signOut]);
+  // The same for a refusal that came back before the handler was set (the user asked for as the app started).
+  useEffect(() => {
+    if (token && me.error?.status === 401) void signOut();
+  }, [token, me.error, signOut]);
 
   const session = useMemo<SessionState>(() => {
     if (token === undefined) return { status: 'loading' };
