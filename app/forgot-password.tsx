@@ -1,1 +1,3 @@
-export { ForgotPasswordScreen as default } from '@/features/auth/forgot-password-screen';
+import { lazyScreen } from '@/features/shell/lazy-screen';
+
+export default lazyScreen(() => import('@/features/auth/forgot-password-screen').then((m) => m.ForgotPasswordScreen));

@@ -1,1 +1,3 @@
-export { InviteScreen as default } from '@/features/auth/invite-screen';
+import { lazyScreen } from '@/features/shell/lazy-screen';
+
+export default lazyScreen(() => import('@/features/auth/invite-screen').then((m) => m.InviteScreen));

@@ -1,1 +1,3 @@
-export { ResetPasswordScreen as default } from '@/features/auth/reset-password-screen';
+import { lazyScreen } from '@/features/shell/lazy-screen';
+
+export default lazyScreen(() => import('@/features/auth/reset-password-screen').then((m) => m.ResetPasswordScreen));

@@ -1,1 +1,3 @@
-export { AccountScreen as default } from '@/features/account/account-screen';
+import { lazyScreen } from '@/features/shell/lazy-screen';
+
+export default lazyScreen(() => import('@/features/account/account-screen').then((m) => m.AccountScreen));

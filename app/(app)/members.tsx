@@ -1,4 +1,4 @@
-import { MembersScreen } from '@/features/members/members-screen';
+import { lazyScreen } from '@/features/shell/lazy-screen';
 import { sectionRoute } from '@/features/shell/section-route';
 
-export default sectionRoute('members', MembersScreen);
+export default sectionRoute('members', lazyScreen(() => import('@/features/members/members-screen').then((m) => m.MembersScreen)));

@@ -2,10 +2,13 @@ import path from 'node:path';
 import express from 'express';
 import { prepareIndexHtml } from './index-html';
 
+/** Where the export puts its content-hashed files: the JS chunks and the assets. */
+const HASHED = /^\/(_expo|assets)\//;
+
 /**
- * Serves the web export: hashed bundles and assets are cached for a year,
- * index.html is revalidated, and any non-API path answers index.html so deep
- * links survive a reload.
+ * Serves the web export: hashed chunks and assets are cached for a year,
+ * index.html is revalidated, and any other non-API path answers index.html so
+ * deep links survive a reload.
  */
 export function serveWeb(app: express.Express, webDir: string) {
   const index = prepareIndexHtml(webDir);
@@ -13,8 +16,7 @@ export function serveWeb(app: express.Express, webDir: string) {
     express.static(webDir, {
       index: false,
       setHeaders(res, file) {
-        const rel = path.relative(webDir, file);
-        if (rel.startsWith('_expo') || rel.startsWith('assets')) {
+        if (HASHED.test('/' + path.relative(webDir, file).split(path.sep).join('/'))) {
           res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
         } else {
           res.setHeader('Cache-Control', 'no-cache');
@@ -22,7 +24,9 @@ export function serveWeb(app: express.Express, webDir: string) {
       },
     }),
   );
-  app.get('/{*splat}', (_req, res, next) => {
+  app.get('/{*splat}', (req, res, next) => {
+    // A hashed file that isn't there (a chunk of an older export) must fail as missing, never load the page as script.
+    if (HASHED.test(req.path)) return void res.status(404).type('text').send('Not found');
     if (index === null) return next();
     res.setHeader('Cache-Control', 'no-cache');
     res.type('html').send(index);

@@ -1,4 +1,4 @@
-import { EditorScreen } from '@/features/procedures/editor-screen';
+import { lazyScreen } from '@/features/shell/lazy-screen';
 import { sectionRoute } from '@/features/shell/section-route';
 
-export default sectionRoute('procedures', EditorScreen);
+export default sectionRoute('procedures', lazyScreen(() => import('@/features/procedures/editor-screen').then((m) => m.EditorScreen)));

@@ -1,4 +1,4 @@
-import { ReplayScreen } from '@/features/replays/replay-screen';
+import { lazyScreen } from '@/features/shell/lazy-screen';
 import { sectionRoute } from '@/features/shell/section-route';
 
-export default sectionRoute('replays', ReplayScreen);
+export default sectionRoute('replays', lazyScreen(() => import('@/features/replays/replay-screen').then((m) => m.ReplayScreen)));

@@ -1,4 +1,4 @@
-import { ReplaysScreen } from '@/features/replays/replays-screen';
+import { lazyScreen } from '@/features/shell/lazy-screen';
 import { sectionRoute } from '@/features/shell/section-route';
 
-export default sectionRoute('replays', ReplaysScreen);
+export default sectionRoute('replays', lazyScreen(() => import('@/features/replays/replays-screen').then((m) => m.ReplaysScreen)));

@@ -1,4 +1,4 @@
-import { InsightScreen } from '@/features/replays/insight-screen';
+import { lazyScreen } from '@/features/shell/lazy-screen';
 import { sectionRoute } from '@/features/shell/section-route';
 
-export default sectionRoute('replays', InsightScreen);
+export default sectionRoute('replays', lazyScreen(() => import('@/features/replays/insight-screen').then((m) => m.InsightScreen)));

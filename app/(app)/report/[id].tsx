@@ -1,1 +1,3 @@
-export { ReportScreen as default } from '@/features/report/report-screen';
+import { lazyScreen } from '@/features/shell/lazy-screen';
+
+export default lazyScreen(() => import('@/features/report/report-screen').then((m) => m.ReportScreen));
