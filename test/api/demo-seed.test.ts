@@ -4,7 +4,8 @@ import path from 'node:path';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { decideStep, type PathSoFar } from '@shared/diagnosis/decide-step';
+import { decideStep } from '@shared/diagnosis/decide-step';
+import { pathSoFar, type RecordedStep } from '@shared/diagnosis/path-so-far';
 import { openDatabase } from '@server/db/data-source';
 import { DiagnosisStep } from '@server/diagnoses/diagnosis-step.entity';
 import { Diagnosis } from '@server/diagnoses/diagnosis.entity';
@@ -14,6 +15,7 @@ import { Meter } from '@server/meters/meter.entity';
 import { ProcedureVersion } from '@server/procedures/procedure-version.entity';
 import { Procedure } from '@server/procedures/procedure.entity';
 import { seedDemoWorkshop } from '@server/seed/demo-workshop';
+import { generateDemoDiagnoses } from '@server/seed/demo-workshop/generate-diagnoses';
 import { seedDemo } from '@server/seed/seed-demo';
 import { Shop } from '@server/shops/shop.entity';
 import { User } from '@server/users/user.entity';
@@ -78,11 +80,14 @@ describe('seeding the demo shop', () => {
     expect(versions.filter((v) => v.procedureId === drafts[0].procedureId && v.status === 'published').length).toBe(1);
   });
 
-  it('has three concluded diagnoses and one open, with one retracted step', async () => {
+  it('has the hand-written and generated concluded diagnoses, one open, and a few retracted steps', async () => {
     const diagnoses = await ds.getRepository(Diagnosis).find();
-    expect(diagnoses.filter((d) => d.status === 'concluded').length).toBe(3);
+    const generated = generateDemoDiagnoses();
+    expect(diagnoses.filter((d) => d.status === 'concluded').length).toBe(3 + generated.diagnoses.length);
     expect(diagnoses.filter((d) => d.status === 'open').length).toBe(1);
-    expect(await ds.getRepository(DiagnosisStep).countBy({ retracted: true })).toBe(1);
+    const retracted = 1 + generated.diagnoses.reduce((n, d) => n + d.steps.filter((s) => s.retractedAtMin !== undefined).length, 0);
+    expect(await ds.getRepository(DiagnosisStep).countBy({ retracted: true })).toBe(retracted);
+    expect(retracted).toBeGreaterThanOrEqual(4);
     for (const d of diagnoses.filter((x) => x.status === 'concluded')) {
       expect(d.conclusion?.findingCheckId).toBe(d.currentCheckId);
       expect(d.conclusion?.labourMinutes).toBeGreaterThan(0);
@@ -90,11 +95,18 @@ describe('seeding the demo shop', () => {
     }
   });
 
-  it('dates everything in the past, concluded diagnoses days apart', async () => {
+  it('dates everything in the past, over six weeks, and never has one person on two diagnoses at once', async () => {
     const diagnoses = await ds.getRepository(Diagnosis).find({ order: { startedAt: 'ASC' } });
     const concluded = diagnoses.filter((d) => d.status === 'concluded');
-    for (let i = 1; i < concluded.length; i++) {
-      expect(concluded[i].startedAt.getTime() - concluded[i - 1].startedAt.getTime()).toBeGreaterThan(2 * 24 * 3600_000);
+    expect(seededAt.getTime() - concluded[0].startedAt.getTime()).toBeGreaterThan(35 * 24 * 3600_000);
+    expect(seededAt.getTime() - concluded.at(-1)!.startedAt.getTime()).toBeLessThan(7 * 24 * 3600_000);
+    for (const a of diagnoses) {
+      for (const b of diagnoses) {
+        if (a === b || a.startedById !== b.startedById) continue;
+        const aEnd = (a.endedAt ?? seededAt).getTime();
+        const bEnd = (b.endedAt ?? seededAt).getTime();
+        expect(aEnd <= b.startedAt.getTime() || bEnd <= a.startedAt.getTime(), `${a.id} and ${b.id}`).toBe(true);
+      }
     }
     const steps = await ds.getRepository(DiagnosisStep).find();
     for (const s of steps) expect(s.recordedAt.getTime()).toBeLessThan(seededAt.getTime());
@@ -103,11 +115,20 @@ describe('seeding the demo shop', () => {
     for (const p of procedures) expect(p.createdAt.getTime()).toBeLessThan(concluded[0].startedAt.getTime());
   });
 
+  it('runs each diagnosis on a version that was published, and not yet retired, when it started', async () => {
+    const diagnoses = await ds.getRepository(Diagnosis).find({ relations: { version: true } });
+    for (const d of diagnoses) {
+      expect(d.version.publishedAt!.getTime()).toBeLessThanOrEqual(d.startedAt.getTime());
+      if (d.version.retiredAt) expect(d.version.retiredAt.getTime()).toBeGreaterThan(d.startedAt.getTime());
+    }
+    expect(diagnoses.filter((d) => d.version.status === 'retired').length).toBeGreaterThan(0);
+  });
+
   it('stores every step exactly as decideStep decides it, replayed from the stored readings', async () => {
     const diagnoses = await ds.getRepository(Diagnosis).find({ relations: { version: true, meter: true } });
     for (const d of diagnoses) {
       const steps = await ds.getRepository(DiagnosisStep).find({ where: { diagnosisId: d.id }, order: { seq: 'ASC' } });
-      const live: PathSoFar[number][] = [];
+      const recorded: RecordedStep[] = [];
       let current = d.version.document.startCheckId;
       steps.forEach((s, i) => expect(s.seq).toBe(i + 1));
       for (const s of steps) {
@@ -115,7 +136,7 @@ describe('seeding the demo shop', () => {
         const decision = decideStep(d.version.document, s.checkId, { reading: s.readingText ?? undefined, choiceId: s.choiceId ?? undefined }, {
           meterRanges: d.meter.ranges,
           ambientC: d.ambientC,
-          path: live,
+          path: pathSoFar(recorded),
         });
         if (!decision.ok) throw new Error(decision.message);
         expect({ verdict: s.verdict, valueSi: s.valueSi, overRange: s.overRange, choiceId: s.choiceId, nextCheckId: s.nextCheckId, evaluation: s.evaluation }).toEqual({
@@ -126,9 +147,8 @@ describe('seeding the demo shop', () => {
           nextCheckId: decision.nextCheckId,
           evaluation: decision.evaluation,
         });
-        if (s.retracted) continue;
-        live.push({ checkId: s.checkId, value: s.valueSi, overRange: s.overRange, uncertainty: (s.evaluation as { uncertainty?: number } | null)?.uncertainty });
-        current = s.nextCheckId!;
+        recorded.push(s);
+        if (!s.retracted) current = s.nextCheckId!;
       }
       expect(current).toBe(d.currentCheckId);
       const reached = d.version.document.checks.find((c) => c.id === current)!;
@@ -161,7 +181,7 @@ describe('the demo shop through the API', () => {
     const apprentice = await h.tokenFor('apprentice');
     const replays = await request(h.app).get('/api/diagnoses').set('authorization', `Bearer ${apprentice}`);
     expect(replays.status).toBe(200);
-    expect(replays.body.diagnoses.length).toBe(3);
+    expect(replays.body.diagnoses.length).toBe(3 + generateDemoDiagnoses().diagnoses.length);
     const detail = await request(h.app).get(`/api/diagnoses/${replays.body.diagnoses[0].id}`).set('authorization', `Bearer ${apprentice}`);
     expect(detail.status).toBe(200);
   });

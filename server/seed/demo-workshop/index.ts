@@ -1,4 +1,5 @@
-import type { EntityManager } from 'typeorm';
+import crypto from 'node:crypto';
+import type { EntityManager, EntityTarget, ObjectLiteral, QueryDeepPartialEntity } from 'typeorm';
 import type { Role } from '@shared/auth/roles';
 import { DiagnosisStep } from '../../diagnoses/diagnosis-step.entity';
 import { Diagnosis } from '../../diagnoses/diagnosis.entity';
@@ -32,14 +33,20 @@ export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, 
     meters.set(m.key, saved);
   }
 
-  const jobs = new Map<string, Job>();
+  // Dozens of machines, jobs and diagnoses: built as rows and inserted in bulk, so a first start stays quick.
+  const jobs = new Map<string, { id: string; machineId: string }>();
   const generated = generateDemoDiagnoses();
+  const machineRows: QueryDeepPartialEntity<Machine>[] = [];
+  const jobRows: QueryDeepPartialEntity<Job>[] = [];
   for (const j of [...DEMO_JOBS, ...generated.jobs]) {
     const booked = resolveWhen(now, j.booked);
-    const machine = await tx.getRepository(Machine).save({ shopId, ...j.machine, createdAt: booked });
-    const job = await tx.getRepository(Job).save({
+    const machineId = crypto.randomUUID();
+    const jobId = crypto.randomUUID();
+    machineRows.push({ id: machineId, shopId, ...j.machine, createdAt: booked });
+    jobRows.push({
+      id: jobId,
       shopId,
-      machineId: machine.id,
+      machineId,
       customerName: j.customerName,
       customerContact: j.customerContact,
       customerEmail: j.customerEmail,
@@ -47,8 +54,10 @@ export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, 
       reference: j.reference,
       createdAt: addMinutes(booked, 2),
     });
-    jobs.set(j.key, job);
+    jobs.set(j.key, { id: jobId, machineId });
   }
+  await insertInChunks(tx, Machine, machineRows);
+  await insertInChunks(tx, Job, jobRows);
 
   /** The version a new diagnosis would have run on each procedure: its newest published one. */
   const running = new Map<string, ProcedureVersion>();
@@ -86,6 +95,8 @@ export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, 
     }
   }
 
+  const diagnosisRows: QueryDeepPartialEntity<Diagnosis>[] = [];
+  const stepRows: QueryDeepPartialEntity<DiagnosisStep>[] = [];
   for (const d of [...DEMO_DIAGNOSES, ...generated.diagnoses]) {
     const version = d.version === undefined ? running.get(d.procedure)! : numbered.get(`${d.procedure}#${d.version}`)!;
     const meter = meters.get(d.meter)!;
@@ -93,7 +104,9 @@ export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, 
     const by = users[d.by];
     const replay = replayDiagnosis(version.document, d, meter.ranges);
     const startedAt = resolveWhen(now, d.start);
-    const diagnosis = await tx.getRepository(Diagnosis).save({
+    const diagnosisId = crypto.randomUUID();
+    diagnosisRows.push({
+      id: diagnosisId,
       shopId,
       versionId: version.id,
       machineId: job.machineId,
@@ -110,10 +123,11 @@ export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, 
       startedAt,
       endedAt: d.conclusion ? addMinutes(startedAt, d.conclusion.atMin) : null,
     });
-    await tx.getRepository(DiagnosisStep).insert(
-      replay.steps.map((s) => ({
+    for (const s of replay.steps) {
+      stepRows.push({
+        id: crypto.randomUUID(),
         shopId,
-        diagnosisId: diagnosis.id,
+        diagnosisId,
         seq: s.seq,
         checkId: s.checkId,
         readingText: s.readingText,
@@ -129,7 +143,14 @@ export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, 
         retracted: s.retractedAtMin !== null,
         retractedAt: s.retractedAtMin === null ? null : addMinutes(startedAt, s.retractedAtMin),
         idempotencyKey: null,
-      })),
-    );
+      });
+    }
   }
+  await insertInChunks(tx, Diagnosis, diagnosisRows);
+  await insertInChunks(tx, DiagnosisStep, stepRows);
+}
+
+/** SQLite limits the variables of one statement, so rows go in a few hundred at a time. */
+async function insertInChunks<T extends ObjectLiteral>(tx: EntityManager, entity: EntityTarget<T>, rows: QueryDeepPartialEntity<T>[]): Promise<void> {
+  for (let i = 0; i < rows.length; i += 40) await tx.getRepository(entity).insert(rows.slice(i, i + 40));
 }
