@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DiagnosisDetail } from '@shared/api/diagnosis-types';
 import type { VersionDetail } from '@shared/api/procedure-types';
 import { fixtureProcedure } from '../support/fixture-procedure';
-import { apiAs, DEMO_PASSWORD, demo, launchBrowser, openPage, type RunningServer, shot, signIn, startServer } from './support';
+import { apiAs, DEMO_PASSWORD, demo, launchBrowser, openPage, type RunningServer, seriousViolations, shot, signIn, startServer } from './support';
 
 /**
  * A picture on a check, end to end: the lead uploads one at the desk (1440×900), says what it shows and
@@ -104,6 +104,7 @@ describe('pictures on a check', () => {
     expect(await thumb.getAttribute('aria-label')).toBe(`${ALT}: show large`);
     expect(await page.getByTestId('check-pictures').textContent()).toContain(ALT);
     await shot(page, 'phone', 'bench-check-picture', page.getByTestId('check-pictures'));
+    expect(await seriousViolations(page), 'bench check with a picture').toEqual([]);
     await thumb.click();
     await page.getByTestId('check-pictures-close').waitFor();
     await shot(page, 'phone', 'bench-check-picture-large');
