@@ -15,6 +15,7 @@ import { apiAs, DEMO_PASSWORD, demo, launchBrowser, openPage, type RunningServer
 let server: RunningServer;
 let browser: Browser;
 let procedureId = '';
+let diagnosisId = '';
 const PICTURE = path.resolve(__dirname, '../fixtures/photos/connector.png');
 const ALT = 'Pickup connector P-2 from the wire side: pin 1 blue/yellow left, pin 2 green right';
 const lead = demo('lead');
@@ -109,6 +110,23 @@ describe('pictures on a check', () => {
     await page.getByTestId('check-pictures-close').waitFor();
     await shot(page, 'phone', 'bench-check-picture-large');
     await page.getByTestId('check-pictures-close').click();
+    await context.close();
+    diagnosisId = diagnosis.id;
+  });
+
+  it('an apprentice replaying the concluded diagnosis sees the picture on its step', async () => {
+    const tech = await apiAs(server.url, demo('tech').email, DEMO_PASSWORD);
+    await tech(`/api/diagnoses/${diagnosisId}/steps`, { method: 'POST', body: { checkId: 'coil', reading: '462 Ω' } });
+    await tech(`/api/diagnoses/${diagnosisId}/steps`, { method: 'POST', body: { checkId: 'spark', choiceId: 'flash' } });
+    await tech(`/api/diagnoses/${diagnosisId}/conclude`, { method: 'POST', body: { note: 'Spark restored after re-seating P-2.' } });
+
+    const { context, page } = await openPage(browser, server.url, 'phone');
+    await signIn(page, demo('apprentice').email, DEMO_PASSWORD, 'replays');
+    await page.goto(`/replays/${diagnosisId}`);
+    await page.getByTestId('replay-step-1').waitFor();
+    await loadedImage(page, 'replay-check-pictures-0');
+    expect(await page.getByTestId('replay-check-pictures').textContent()).toContain(ALT);
+    await shot(page, 'phone', 'replay-check-picture', page.getByTestId('replay-check-pictures'));
     await context.close();
   });
 });

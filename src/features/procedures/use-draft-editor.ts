@@ -35,7 +35,12 @@ export function useDraftEditor(procedureId: string, loaded: DraftDetail) {
   }, []);
 
   useEffect(() => {
-    if (document === saved || save.kind === 'conflict' || save.kind === 'failed' || inFlight.current) return;
+    if (document === saved) {
+      // Undo then redo before the autosave fired: back where the server is, nothing to send.
+      if (save.kind === 'pending') setSave({ kind: 'saved' });
+      return;
+    }
+    if (save.kind === 'conflict' || save.kind === 'failed' || inFlight.current) return;
     setSave({ kind: 'pending' });
     const timer = setTimeout(async () => {
       inFlight.current = true;
