@@ -4,8 +4,9 @@ import path from 'node:path';
 import type { PhotoType } from '@shared/photos/schemas';
 
 /**
- * Photo bytes on disk: <DATA_DIR>/photos/<shopId>/<32 random hex>.<ext>. The
- * name the file had on the phone is never used, so no upload can pick its path.
+ * Photo bytes on disk (diagnosis photos and procedure pictures alike):
+ * <DATA_DIR>/photos/<shopId>/<32 random hex>.<ext>. The name the file had on
+ * the device is never used, so no upload can pick its path.
  */
 const EXTENSION: Record<PhotoType, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp' };
 const SHOP_ID = /^[0-9a-f-]{36}$/;
