@@ -18,6 +18,8 @@ import { ReplayHeader } from '@/features/replays/components/replay-header';
 import { StepComments } from '@/features/replays/components/step-comments';
 import { StepPanel } from '@/features/replays/components/step-panel';
 import { earlierReadings, replayPath, stepDurations } from '@/features/replays/replay-path';
+import { STEP_KEYS } from '@/features/replays/step-keys';
+import { useStepKeys } from '@/features/replays/use-step-keys';
 import { useAnswerPractice } from '@/hooks/use-practice';
 import { useReplay, useStepComments } from '@/hooks/use-replays';
 import { layoutProcedure } from '@/lib/procedure-layout';
@@ -150,6 +152,7 @@ function ReplayViewer({ diagnosis, comments, practice, onMode }: ViewerProps) {
       meterRanges={diagnosis.meter.ranges}
       nextTitle={checkOf(step.nextCheckId)?.title ?? null}
       revealed={revealed}
+      photos={diagnosis.photos.filter((p) => p.stepId === step.id)}
       prompt={question ? <PracticePrompt question={question} result={result} onAnswer={(v) => void submit(v)} busy={answer.isMutating} error={answerError} /> : null}
     >
       {revealed ? (
@@ -169,8 +172,17 @@ function ReplayViewer({ diagnosis, comments, practice, onMode }: ViewerProps) {
     </FindingPanel>
   );
 
+  // Keys do what the buttons do, and no more: Next waits for an answer, End does not skip practice questions.
+  const canNext = !atEnd && revealed;
+  useStepKeys({
+    previous: () => index > 0 && go(index - 1),
+    next: () => canNext && go(index + 1),
+    first: () => index > 0 && go(0),
+    finding: () => !practice && !atEnd && go(steps.length),
+  });
+
   const header = <ReplayHeader diagnosis={diagnosis} practice={practice} onMode={onMode} onBack={() => router.navigate('/replays')} compact={!isDesk && index > 0} />;
-  const nav = <StepNav index={index} steps={steps.length} waiting={!revealed} onGo={go} />;
+  const nav = <StepNav index={index} steps={steps.length} waiting={!revealed} onGo={go} keysShown={isWide} practice={practice} />;
 
   if (isDesk) {
     return (
@@ -224,29 +236,40 @@ interface StepNavProps {
   /** A practice question is open: Next waits for the answer. */
   waiting: boolean;
   onGo: (index: number) => void;
+  /** Where a keyboard is likely (tablet and desk), the shortcuts are named under the buttons. */
+  keysShown: boolean;
+  practice: boolean;
 }
 
 /** Previous and Next in thumb reach, always at the bottom of the screen. */
-function StepNav({ index, steps, waiting, onGo }: StepNavProps) {
+function StepNav({ index, steps, waiting, onGo, keysShown, practice }: StepNavProps) {
   const colors = useTheme();
   const end = index === steps;
+  const keys = STEP_KEYS.filter((k) => !(practice && k.action === 'finding'));
   return (
-    <View style={[styles.nav, { borderTopColor: colors.border, backgroundColor: colors.surface }]} role="navigation" aria-label="Steps">
-      <Button testID="replay-previous" label="Previous" icon="back" disabled={index === 0} onPress={() => onGo(index - 1)} style={styles.navButton} />
-      <View style={styles.navCount} testID="replay-count">
-        <Text variant="label" tone="textMuted">
-          {end ? 'THE END' : 'STEP'}
-        </Text>
-        <Text variant="bodyStrong">{end ? 'Finding' : `${index + 1} of ${steps}`}</Text>
+    <View style={[styles.navFrame, { borderTopColor: colors.border, backgroundColor: colors.surface }]} role="navigation" aria-label="Steps">
+      <View style={styles.nav}>
+        <Button testID="replay-previous" label="Previous" icon="back" disabled={index === 0} onPress={() => onGo(index - 1)} style={styles.navButton} />
+        <View style={styles.navCount} testID="replay-count">
+          <Text variant="label" tone="textMuted">
+            {end ? 'THE END' : 'STEP'}
+          </Text>
+          <Text variant="bodyStrong">{end ? 'Finding' : `${index + 1} of ${steps}`}</Text>
+        </View>
+        <Button
+          testID="replay-next"
+          label={waiting ? 'Answer first' : index === steps - 1 ? 'To the finding' : 'Next step'}
+          variant="primary"
+          disabled={end || waiting}
+          onPress={() => onGo(index + 1)}
+          style={styles.navButton}
+        />
       </View>
-      <Button
-        testID="replay-next"
-        label={waiting ? 'Answer first' : index === steps - 1 ? 'To the finding' : 'Next step'}
-        variant="primary"
-        disabled={end || waiting}
-        onPress={() => onGo(index + 1)}
-        style={styles.navButton}
-      />
+      {keysShown ? (
+        <Text testID="replay-keys" variant="small" tone="textMuted" style={styles.keys}>
+          {`Keys: ${keys.map((k) => `${k.shown} ${k.does}`).join(' · ')}`}
+        </Text>
+      ) : null}
     </View>
   );
 }
@@ -260,7 +283,9 @@ const styles = StyleSheet.create({
   phoneScroll: { flexGrow: 1 },
   phoneColumn: { width: '100%', maxWidth: layout.maxFormWidth + 200, alignSelf: 'center', gap: space.xl },
   diagramSection: { borderTopWidth: 1, paddingTop: space.lg, gap: space.md },
-  nav: { flexDirection: 'row', alignItems: 'center', gap: space.md, paddingHorizontal: space.lg, paddingVertical: space.sm, borderTopWidth: 1 },
+  navFrame: { borderTopWidth: 1, paddingHorizontal: space.lg, paddingVertical: space.sm, gap: space.xs },
+  nav: { flexDirection: 'row', alignItems: 'center', gap: space.md },
+  keys: { textAlign: 'center' },
   navButton: { flex: 1, minHeight: 56 },
   navCount: { minWidth: 64, alignItems: 'center' },
 });

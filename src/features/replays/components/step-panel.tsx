@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
-import type { StepView } from '@shared/api/diagnosis-types';
+import type { PhotoView, StepView } from '@shared/api/diagnosis-types';
 import type { PriorReading } from '@shared/engine/evaluate';
 import { explainEvaluation } from '@shared/engine/explain';
 import type { Check, MeasureCheck } from '@shared/engine/procedure';
@@ -11,6 +11,7 @@ import { Icon } from '@/components/ui/icon';
 import { Heading, Text } from '@/components/ui/text';
 import { SpecBar } from '@/components/spec-bar/spec-bar';
 import { VerdictPanel } from '@/components/verdict/verdict-mark';
+import { PhotoStrip } from '@/features/photos/photo-strip';
 import { CheckPictures } from '@/features/procedures/components/check-pictures';
 import { formatDuration } from '@/features/replays/replay-path';
 import { formatDateTime } from '@/lib/format';
@@ -34,12 +35,14 @@ interface StepPanelProps {
   revealed: boolean;
   /** The practice question, right under the reading so the reveal appears below it rather than pushing it away. */
   prompt?: ReactNode;
+  /** Photos taken on this step, shown with the note once the step is revealed. */
+  photos: readonly PhotoView[];
   /** The comments, at the end. */
   children?: ReactNode;
 }
 
 /** One step of a replay: the check's instructions and probe points, the reading against its spec, the verdict and the note. */
-export function StepPanel({ step, check, position, total, spentMs, earlier, meterRanges, nextTitle, revealed, prompt, children }: StepPanelProps) {
+export function StepPanel({ step, check, position, total, spentMs, earlier, meterRanges, nextTitle, revealed, prompt, photos, children }: StepPanelProps) {
   const c = useTheme();
   return (
     <View style={styles.panel} testID={`replay-step-${step.seq}`}>
@@ -92,6 +95,11 @@ export function StepPanel({ step, check, position, total, spentMs, earlier, mete
           </Text>
           <Text>{step.note}</Text>
         </View>
+      ) : null}
+      {revealed && photos.length ? (
+        <Fact label={photos.length === 1 ? 'Photo taken on this step' : `${photos.length} photos taken on this step`} testID="replay-photos">
+          <PhotoStrip photos={photos} of={check.title} testID="replay-photo" />
+        </Fact>
       ) : null}
       {revealed && nextTitle ? (
         <Fact label={step.retracted ? 'Would have led to' : 'Led to'} testID="replay-led-to">
