@@ -12,19 +12,42 @@ const STEP = 1.25;
 
 const clampScale = (s: number) => Math.min(MAX_SCALE, Math.max(MIN_SCALE, s));
 
-/** The whole diagram in the pane, centred, never enlarged past 1:1. */
-export function fitToView(diagram: { width: number; height: number }, pane: { width: number; height: number }): Viewport {
-  const scale = clampScale(Math.min(1, pane.width / Math.max(diagram.width, 1), pane.height / Math.max(diagram.height, 1)));
-  return { scale, x: Math.max(0, (pane.width - diagram.width * scale) / 2), y: Math.max(0, (pane.height - diagram.height * scale) / 2) };
+/**
+ * The whole diagram in the pane, centred, never enlarged past 1:1. With `legible`, never shrunk below that scale
+ * either: a diagram too big to fit at it is fitted to the pane's width instead (or shown at `legible` when even
+ * that is too small) from its top, where the start check is, and the rest is panned to. A diagram still wider
+ * than the pane is centred across on `focus` (the start check), kept within the drawing's edges.
+ */
+export function fitToView(
+  diagram: { width: number; height: number },
+  pane: { width: number; height: number },
+  legible = MIN_SCALE,
+  focus?: { x: number },
+): Viewport {
+  const across = pane.width / Math.max(diagram.width, 1);
+  const whole = clampScale(Math.min(1, across, pane.height / Math.max(diagram.height, 1)));
+  const scale = whole >= legible ? whole : clampScale(Math.max(legible, Math.min(1, across)));
+  const centred = (room: number, size: number) => Math.max(0, (room - size * scale) / 2);
+  const overflow = pane.width - diagram.width * scale;
+  const x = overflow >= 0 || !focus ? centred(pane.width, diagram.width) : Math.min(0, Math.max(overflow, pane.width / 2 - focus.x * scale));
+  return { scale, x, y: scale === whole ? centred(pane.height, diagram.height) : 0 };
 }
 
-/** Zoom in (+1) or out (-1) about the pane's centre, so what is in the middle stays there. */
-export function zoomBy(view: Viewport, direction: 1 | -1, pane: { width: number; height: number }): Viewport {
-  const scale = clampScale(direction === 1 ? view.scale * STEP : view.scale / STEP);
+/** Zoom by `factor` about a point of the pane (the pointer), so what is under it stays there. */
+export function zoomAt(view: Viewport, factor: number, point: { x: number; y: number }): Viewport {
+  const scale = clampScale(view.scale * factor);
   const k = scale / view.scale;
-  const cx = pane.width / 2;
-  const cy = pane.height / 2;
-  return { scale, x: cx - (cx - view.x) * k, y: cy - (cy - view.y) * k };
+  return { scale, x: point.x - (point.x - view.x) * k, y: point.y - (point.y - view.y) * k };
+}
+
+/** Zoom in (+1) or out (-1) one step about the pane's centre, so what is in the middle stays there. */
+export function zoomBy(view: Viewport, direction: 1 | -1, pane: { width: number; height: number }): Viewport {
+  return zoomAt(view, direction === 1 ? STEP : 1 / STEP, { x: pane.width / 2, y: pane.height / 2 });
+}
+
+/** How much one scroll-wheel event zooms: a notch of a mouse wheel (about 100 px of deltaY) is one 1.25× step. */
+export function wheelFactor(deltaY: number): number {
+  return Math.pow(STEP, -deltaY / 100);
 }
 
 /** Move the view so a node's centre sits in the middle of the pane. */

@@ -35,20 +35,31 @@ export interface DiagramEdge {
 }
 
 export interface ProcedureLayout {
+  /** The check a diagnosis starts at. */
+  startId: string;
   width: number;
   height: number;
   nodes: DiagramNode[];
   edges: DiagramEdge[];
 }
 
-export const NODE_WIDTH = 184;
+/** Type sizes on the diagram, in diagram units (1 unit = 1 px at 100 %). */
+export const DIAGRAM_FONT = { caption: 13, title: 15, label: 13 } as const;
+/** The smallest text anyone should have to read on a screen, in px. */
+export const LEGIBLE_PX = 12;
+/** The zoom at which the smallest text of the diagram is drawn at LEGIBLE_PX: "fit" never goes below it. */
+export const LEGIBLE_SCALE = LEGIBLE_PX / Math.min(...Object.values(DIAGRAM_FONT));
+
+export const NODE_WIDTH = 196;
 export const LINE_HEIGHT = 19;
-const NODE_PADDING = 14;
+/** The kind word line at the top of a node ("MEASURE · start"). */
+export const CAPTION_HEIGHT = 18;
+export const NODE_PADDING = 12;
 const CHARS_PER_LINE = 21;
 const MAX_LINES = 3;
 const LABEL_CHARS = 24;
-/** Rough width of one character of the 13-unit label font, to reserve room for labels on the arrows. */
-const LABEL_CHAR_WIDTH = 7.2;
+/** Rough width of one character of the label font, to reserve room for labels on the arrows. */
+export const LABEL_CHAR_WIDTH = 7.2;
 
 /** Verdicts as short arrow labels. */
 const ARROW_WORDS: Record<Verdict, string> = { in_spec: 'in spec', low: 'low', high: 'high', open: 'open', marginal: 'marginal', no_reading: 'no reading' };
@@ -106,7 +117,7 @@ export function layoutProcedure(document: ProcedureDocument): ProcedureLayout {
   for (const check of document.checks) {
     const lines = wrapTitle(check.title);
     wrapped.set(check.id, lines);
-    g.setNode(check.id, { width: NODE_WIDTH, height: NODE_PADDING * 2 + lines.length * LINE_HEIGHT });
+    g.setNode(check.id, { width: NODE_WIDTH, height: NODE_PADDING * 2 + CAPTION_HEIGHT + lines.length * LINE_HEIGHT });
   }
   const labels = new Map<string, string>();
   for (const check of document.checks) {
@@ -135,5 +146,5 @@ export function layoutProcedure(document: ProcedureDocument): ProcedureLayout {
     };
   });
   const graph = g.graph();
-  return { width: graph.width ?? 0, height: graph.height ?? 0, nodes, edges };
+  return { startId: document.startCheckId, width: graph.width ?? 0, height: graph.height ?? 0, nodes, edges };
 }

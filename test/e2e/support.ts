@@ -15,6 +15,15 @@ export const SIZES = {
 } as const;
 export type Size = keyof typeof SIZES;
 
+/** A tablet held sideways and upright: checked for the lead's desk screens. */
+export const TABLETS = {
+  tablet: { width: 1024, height: 768 },
+  tabletTall: { width: 820, height: 1180 },
+} as const;
+/** Any size a test opens a page at. */
+export type PageSize = Size | keyof typeof TABLETS;
+const VIEWPORTS = { ...SIZES, ...TABLETS };
+
 export const demo = (role: Role) => DEMO_ACCOUNTS.find((a) => a.role === role)!;
 export { DEMO_PASSWORD };
 
@@ -55,10 +64,10 @@ export function launchBrowser(): Promise<Browser> {
 export async function openPage(
   browser: Browser,
   baseURL: string,
-  size: Size,
+  size: PageSize,
   colorScheme: 'light' | 'dark' = 'light',
 ): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await browser.newContext({ baseURL, viewport: SIZES[size], colorScheme });
+  const context = await browser.newContext({ baseURL, viewport: VIEWPORTS[size], colorScheme });
   const page = await context.newPage();
   return { context, page };
 }
@@ -67,7 +76,7 @@ export async function openPage(
  * Saves screenshots/<size>/<name>.png once web fonts are in. Pages scroll
  * inside the app, so `focus` scrolls the part worth seeing into view first.
  */
-export async function shot(page: Page, size: Size, name: string, focus?: Locator) {
+export async function shot(page: Page, size: PageSize, name: string, focus?: Locator) {
   await page.evaluate(() => document.fonts.ready);
   await focus?.scrollIntoViewIfNeeded();
   const dir = path.join(SHOTS, size);

@@ -1,9 +1,10 @@
 import Head from 'expo-router/head';
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useMemo, useState } from 'react';
-import { ScrollView, StyleSheet, TextInput, View } from 'react-native';
+import { ScrollView, StyleSheet, TextInput, useWindowDimensions, View } from 'react-native';
 import type { DraftDetail } from '@shared/api/procedure-types';
 import { addCheck, deleteCheck, replaceCheck, setStart } from '@shared/editor/document-edits';
+import { type Direction, neighbour } from '@shared/editor/neighbours';
 import { CHECK_KINDS } from '@shared/engine/procedure';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -20,13 +21,13 @@ import { ProcedureDiagram } from '@/features/procedures/components/procedure-dia
 import { VersionCompareLoader, type VersionPick } from '@/features/procedures/components/version-compare';
 import { VersionsPanel } from '@/features/procedures/components/versions-panel';
 import { useDraftEditor } from '@/features/procedures/use-draft-editor';
-import { useUndoKeys } from '@/features/procedures/use-undo-keys';
+import { useEditorKeys } from '@/features/procedures/use-editor-keys';
 import { useDraft, useProcedure } from '@/hooks/use-procedures';
 import { api, ApiError } from '@/lib/api';
-import { radius, space, type, useTheme } from '@/lib/theme';
+import { radius, space, type, useBreakpoints, useTheme } from '@/lib/theme';
 
-type SidePanel = 'check' | 'preview' | 'versions';
-const SIDE_PANELS: { key: SidePanel; label: string }[] = [
+type SidePanel = 'checks' | 'check' | 'preview' | 'versions';
+const SIDE_PANELS: { key: Exclude<SidePanel, 'checks'>; label: string }[] = [
   { key: 'check', label: 'Check' },
   { key: 'preview', label: 'Preview' },
   { key: 'versions', label: 'Versions' },
@@ -123,17 +124,47 @@ function NoDraft({ procedureId, title, latest, onBack, onDraftStarted }: { proce
 
 function Editor({ procedureId, title, loaded, onCopied, onBack, onDraftStarted }: { procedureId: string; title: string; loaded: DraftDetail; onCopied: (id: string) => void; onBack: () => void; onDraftStarted: () => void }) {
   const colors = useTheme();
+  const { isDesk, width } = useBreakpoints();
+  const { height } = useWindowDimensions();
   const editor = useDraftEditor(procedureId, loaded);
   const { document, problems } = editor;
-  const [selectedId, setSelectedId] = useState<string | null>(document.startCheckId);
+  const [selectedId, select] = useState<string | null>(document.startCheckId);
+  const setSelectedId = (id: string | null) => {
+    select(id);
+    setConfirmDelete(false);
+  };
   const [note, setNote] = useState('');
   const [publishing, setPublishing] = useState(false);
   const [message, setMessage] = useState<{ tone: 'error' | 'done'; text: string } | null>(null);
   const [panel, setPanel] = useState<SidePanel>('check');
   const [comparing, setComparing] = useState<Comparison | null>(null);
-  useUndoKeys(editor.undo, editor.redo);
   const flagged = useMemo(() => new Set(problems.map((p) => p.checkId)), [problems]);
   const selected = document.checks.find((c) => c.id === selectedId) ?? null;
+  const [confirmDelete, setConfirmDelete] = useState(false);
+  const canDelete = selected !== null && document.checks.length > 1;
+  const move = (direction: Direction) => {
+    const next = selectedId ? neighbour(document, selectedId, direction) : document.startCheckId;
+    if (next) setSelectedId(next);
+  };
+  const removeSelected = () => {
+    if (!selected) return;
+    editor.edit(deleteCheck(document, selected.id));
+    setSelectedId(null);
+    setConfirmDelete(false);
+  };
+  useEditorKeys({
+    undo: editor.undo,
+    redo: editor.redo,
+    up: () => move('up'),
+    down: () => move('down'),
+    left: () => move('left'),
+    right: () => move('right'),
+    delete: () => {
+      if (!canDelete) return;
+      setPanel('check');
+      setConfirmDelete(true);
+    },
+  });
 
   const publish = async () => {
     setPublishing(true);
@@ -156,6 +187,32 @@ function Editor({ procedureId, title, loaded, onCopied, onBack, onDraftStarted }
       setMessage({ tone: 'error', text: error instanceof Error ? error.message : 'The copy could not be made. Try again.' });
     }
   };
+
+  // A desk has the check list, the diagram and the side panel side by side. A tablet sideways keeps the diagram
+  // beside one panel and moves the check list into a tab of it; upright, that panel goes under the diagram.
+  const arrangement = isDesk ? 'desk' : width > height ? 'beside' : 'stacked';
+  const sidePanels = isDesk ? SIDE_PANELS : [{ key: 'checks' as const, label: 'Checks' }, ...SIDE_PANELS];
+  const shownPanel = panel === 'checks' && isDesk ? 'check' : panel;
+  // Away from a desk the list shares the panel with the form, so picking a check opens its form.
+  const pick = (id: string) => {
+    setSelectedId(id);
+    if (!isDesk) setPanel('check');
+  };
+  const checksPanel = (
+    <>
+      <View style={styles.addRow}>
+        {CHECK_KINDS.map((k) => (
+          <Button key={k} testID={`add-${k}`} label={k} icon="plus" style={styles.addKind} onPress={() => {
+            const added = addCheck(document, k);
+            editor.edit(added.document);
+            pick(added.id);
+          }} />
+        ))}
+      </View>
+      <ProblemsPanel problems={problems} onSelect={pick} />
+      <CheckList document={document} selectedId={selectedId} flagged={flagged} onSelect={pick} />
+    </>
+  );
 
   const saveWords = { saved: 'All changes saved', pending: 'Unsaved changes…', saving: 'Saving…', conflict: 'Not saved: conflict', failed: 'Not saved' }[editor.save.kind];
   const canPublish = problems.length === 0 && editor.isSaved && note.trim().length > 0;
@@ -203,36 +260,40 @@ function Editor({ procedureId, title, loaded, onCopied, onBack, onDraftStarted }
           <Button testID="save-retry" label="Try saving again" onPress={editor.retry} />
         </View>
       ) : null}
+      {confirmDelete && selected ? (
+        <View style={[styles.banner, { backgroundColor: colors.dangerSoft }]} role="alert" testID="confirm-delete">
+          <Text style={styles.grow}>{`Delete “${selected.title}”? Outcomes that lead to it will be flagged until you re-point them; Undo brings it back.`}</Text>
+          <Button testID="confirm-delete-yes" variant="danger" label="Delete check" onPress={removeSelected} />
+          <Button testID="confirm-delete-no" label="Keep it" onPress={() => setConfirmDelete(false)} />
+        </View>
+      ) : null}
       {message ? <View style={styles.message}>{message.tone === 'error' ? <FormError message={message.text} /> : <Text tone="success">{message.text}</Text>}</View> : null}
       {comparing ? (
         <VersionCompareLoader procedureId={procedureId} before={comparing.before} after={comparing.after} draft={document} onClose={() => setComparing(null)} />
       ) : (
-      <View style={styles.columns}>
-        <ScrollView style={[styles.left, { borderRightColor: colors.border }]} contentContainerStyle={styles.pad}>
-          <View style={styles.addRow}>
-            {CHECK_KINDS.map((k) => (
-              <Button key={k} testID={`add-${k}`} label={k} icon="plus" style={styles.addKind} onPress={() => {
-                const added = addCheck(document, k);
-                editor.edit(added.document);
-                setSelectedId(added.id);
-              }} />
-            ))}
-          </View>
-          <ProblemsPanel problems={problems} onSelect={setSelectedId} />
-          <CheckList document={document} selectedId={selectedId} flagged={flagged} onSelect={setSelectedId} />
-        </ScrollView>
+      <View style={[styles.columns, arrangement === 'stacked' && styles.stacked]}>
+        {arrangement === 'desk' ? (
+          <ScrollView style={[styles.left, { borderRightColor: colors.border }]} contentContainerStyle={styles.pad}>
+            {checksPanel}
+          </ScrollView>
+        ) : null}
         <View style={styles.middle}>
-          <ProcedureDiagram document={document} selectedId={selectedId} flagged={flagged} onSelect={setSelectedId} />
+          <ProcedureDiagram document={document} selectedId={selectedId} flagged={flagged} onSelect={setSelectedId} shortcuts />
         </View>
-        <ScrollView style={[styles.right, { borderLeftColor: colors.border }]} contentContainerStyle={styles.pad}>
+        <ScrollView
+          style={arrangement === 'stacked' ? [styles.below, { borderTopColor: colors.border }] : [styles.right, arrangement === 'beside' && styles.rightNarrow, { borderLeftColor: colors.border }]}
+          contentContainerStyle={styles.pad}
+        >
           <View style={styles.tabs} role="group" aria-label="Side panel">
-            {SIDE_PANELS.map((p) => (
-              <Button key={p.key} testID={`panel-${p.key}`} label={p.label} selected={panel === p.key} onPress={() => setPanel(p.key)} style={styles.tab} />
+            {sidePanels.map((p) => (
+              <Button key={p.key} testID={`panel-${p.key}`} label={p.label} selected={shownPanel === p.key} onPress={() => setPanel(p.key)} style={styles.tab} />
             ))}
           </View>
-          {panel === 'preview' ? (
+          {shownPanel === 'checks' ? (
+            checksPanel
+          ) : shownPanel === 'preview' ? (
             <PreviewPanel document={document} onShowCheck={setSelectedId} />
-          ) : panel === 'versions' ? (
+          ) : shownPanel === 'versions' ? (
             <VersionsPanel procedureId={procedureId} onDraftStarted={onDraftStarted} onCompare={(before, after) => setComparing({ before, after })} />
           ) : selected ? (
             <>
@@ -240,16 +301,7 @@ function Editor({ procedureId, title, loaded, onCopied, onBack, onDraftStarted }
               <OutcomesEditor check={selected} document={document} onEdit={(next) => editor.edit(next)} onSelect={setSelectedId} />
               <View style={styles.addRow}>
                 {selected.id !== document.startCheckId ? <Button testID="make-start" label="Make this the start" onPress={() => editor.edit(setStart(document, selected.id))} /> : null}
-                <Button
-                  testID="delete-check"
-                  variant="danger"
-                  label="Delete check"
-                  disabled={document.checks.length === 1}
-                  onPress={() => {
-                    editor.edit(deleteCheck(document, selected.id));
-                    setSelectedId(null);
-                  }}
-                />
+                <Button testID="delete-check" variant="danger" label="Delete check" disabled={!canDelete} onPress={() => setConfirmDelete(true)} />
               </View>
             </>
           ) : (
@@ -275,6 +327,9 @@ const styles = StyleSheet.create({
   left: { width: 280, flexGrow: 0, borderRightWidth: 1 },
   middle: { flex: 1, padding: space.md },
   right: { width: 400, flexGrow: 0, borderLeftWidth: 1 },
+  rightNarrow: { width: 360 },
+  stacked: { flexDirection: 'column' },
+  below: { flex: 1.1, borderTopWidth: 1 },
   pad: { padding: space.md, gap: space.lg },
   addRow: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
   addKind: { flexBasis: '46%', flexGrow: 1, paddingHorizontal: space.sm },

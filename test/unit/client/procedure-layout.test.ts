@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { layoutProcedure, NODE_WIDTH, wrapTitle, type DiagramNode, type Point } from '@/lib/procedure-layout';
+import { fitToView } from '@shared/editor/viewport';
+import { DIAGRAM_FONT, layoutProcedure, LEGIBLE_PX, LEGIBLE_SCALE, NODE_WIDTH, wrapTitle, type DiagramNode, type Point } from '@/lib/procedure-layout';
 import { DEMO_PROCEDURES } from '@server/seed/demo-workshop/procedures';
 import { demoProcedure } from '../engine/demo-procedure';
 
@@ -67,6 +68,26 @@ describe('layoutProcedure', () => {
         const l = layoutProcedure(v.document);
         expect(l.nodes).toHaveLength(v.document.checks.length);
         expect(l.width).toBeGreaterThan(0);
+      }
+    }
+  });
+});
+
+describe('legible text at "fit"', () => {
+  // The editor's diagram pane at 1440×900: the window less the sidebar (264), the check list (280), the side
+  // panel (400) and padding; the header and tools take about 190 px of the height. Measured on the screenshots.
+  const pane = { width: 1440 - 264 - 280 - 400 - 26, height: 900 - 190 };
+
+  it('draws the smallest text at 12 px or more on every demo procedure, fitting the width when the whole is too small', () => {
+    expect(LEGIBLE_SCALE * Math.min(...Object.values(DIAGRAM_FONT))).toBeCloseTo(LEGIBLE_PX, 10);
+    for (const p of DEMO_PROCEDURES) {
+      for (const v of p.versions) {
+        const layout = layoutProcedure(v.document);
+        const fit = fitToView(layout, pane, LEGIBLE_SCALE);
+        expect(fit.scale * DIAGRAM_FONT.caption, p.title).toBeGreaterThanOrEqual(LEGIBLE_PX - 1e-9);
+        // Whole-diagram fit alone would shrink the large ones below that.
+        const whole = fitToView(layout, pane);
+        if (v.document.checks.length >= 30) expect(whole.scale * DIAGRAM_FONT.caption, p.title).toBeLessThan(LEGIBLE_PX);
       }
     }
   });
