@@ -16,7 +16,7 @@ async function main() {
   if (config.buildWeb) ensureWebBuild(ROOT, (m) => console.log(m));
   const ds = await openDatabase(path.join(config.dataDir, 'probepath.sqlite'));
   const runtime = await createRuntime(config, ds);
-  const seeded = config.seedDemo ? await seedDemo(ds) : false;
+  const seeded = config.seedDemo ? await seedDemo(ds, { dataDir: config.dataDir }) : false;
   const app = createApp(runtime.ctx, { webDir: path.join(ROOT, 'dist') });
 
   const server = app.listen(config.port, config.host, () => {

@@ -8,9 +8,10 @@ import { seedDemoWorkshop } from './demo-workshop';
 
 /**
  * Seeds the demo shop on first start only: a database with any shop is left alone.
- * API tests take the accounts without the workshop content, so their counts are their own.
+ * API tests take the accounts without the workshop content, so their counts are their own. With `dataDir`
+ * a few seeded diagnoses get a step photo, written under it like an uploaded one.
  */
-export async function seedDemo(ds: DataSource, options: { workshop?: boolean } = {}): Promise<boolean> {
+export async function seedDemo(ds: DataSource, options: { workshop?: boolean; dataDir?: string } = {}): Promise<boolean> {
   if ((await ds.getRepository(Shop).count()) > 0) return false;
   await ds.transaction(async (tx) => {
     const shop = await tx.getRepository(Shop).save({ name: DEMO_SHOP });
@@ -18,7 +19,7 @@ export async function seedDemo(ds: DataSource, options: { workshop?: boolean } =
     for (const a of DEMO_ACCOUNTS) {
       users[a.role] = await tx.getRepository(User).save({ shopId: shop.id, email: a.email, name: a.name, role: a.role, active: true, passwordHash: await hashPassword(DEMO_PASSWORD) });
     }
-    if (options.workshop !== false) await seedDemoWorkshop(tx, shop, users);
+    if (options.workshop !== false) await seedDemoWorkshop(tx, shop, users, { dataDir: options.dataDir });
   });
   return true;
 }

@@ -18,6 +18,8 @@ import { seedDemoWorkshop } from '@server/seed/demo-workshop';
 import { generateDemoDiagnoses } from '@server/seed/demo-workshop/generate-diagnoses';
 import { seedDemo } from '@server/seed/seed-demo';
 import { Shop } from '@server/shops/shop.entity';
+import { photoFile } from '@server/photos/photo-storage';
+import { DiagnosisPhoto } from '@server/photos/photo.entity';
 import { User } from '@server/users/user.entity';
 import type { Role } from '@shared/auth/roles';
 import { createHarness, type Harness } from '../support/api-harness';
@@ -44,7 +46,7 @@ beforeAll(async () => {
   dir = fs.mkdtempSync(path.join(os.tmpdir(), 'probepath-demo-seed-'));
   ds = await openDatabase(path.join(dir, 'demo.sqlite'));
   seededAt = new Date();
-  expect(await seedDemo(ds)).toBe(true);
+  expect(await seedDemo(ds, { dataDir: dir })).toBe(true);
 });
 
 afterAll(async () => {
@@ -156,6 +158,22 @@ describe('seeding the demo shop', () => {
     }
   });
 
+  it('gives a few generated diagnoses a drawn PNG of the meter on the reading that decided them', async () => {
+    const photos = await ds.getRepository(DiagnosisPhoto).find();
+    expect(photos.length).toBe(3);
+    for (const p of photos) {
+      const step = await ds.getRepository(DiagnosisStep).findOneByOrFail({ id: p.stepId! });
+      const diagnosis = await ds.getRepository(Diagnosis).findOneByOrFail({ id: p.diagnosisId });
+      expect(step.nextCheckId).toBe(diagnosis.conclusion?.findingCheckId);
+      expect(step.readingText).not.toBeNull();
+      const bytes = fs.readFileSync(photoFile(dir, p.shopId, p.storageKey));
+      expect(bytes.length).toBe(p.size);
+      // The PNG signature (ISO/IEC 15948).
+      expect([...bytes.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+      expect(p.contentType).toBe('image/png');
+    }
+  });
+
   it('does not duplicate anything when seeded again', async () => {
     const before = await counts();
     expect(await seedDemo(ds)).toBe(false);
@@ -184,6 +202,11 @@ describe('the demo shop through the API', () => {
     expect(replays.body.diagnoses.length).toBe(3 + generateDemoDiagnoses().diagnoses.length);
     const detail = await request(h.app).get(`/api/diagnoses/${replays.body.diagnoses[0].id}`).set('authorization', `Bearer ${apprentice}`);
     expect(detail.status).toBe(200);
+    // The seeded step photos are the apprentice's to see, as photos of concluded diagnoses are.
+    const photographed = await h.runtime.ctx.ds.getRepository(DiagnosisPhoto).findOneByOrFail({});
+    const photo = await request(h.app).get(`/api/photos/${photographed.id}`).set('authorization', `Bearer ${apprentice}`);
+    expect(photo.status).toBe(200);
+    expect(photo.headers['content-type']).toBe('image/png');
   });
 
   it('lets the technician carry on with the open diagnosis', async () => {

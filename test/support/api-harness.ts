@@ -39,7 +39,7 @@ export async function createHarness(options: AppOptions & { demoWorkshop?: boole
   const config = readConfig({ DATA_DIR: dataDir, LOG_LEVEL: 'silent', JWT_SECRET: 'test-secret-'.padEnd(48, 'x'), PUBLIC_URL: 'http://probepath.test' });
   const ds = await openDatabase(path.join(dataDir, 'test.sqlite'));
   const runtime = await createRuntime(config, ds);
-  await seedDemo(ds, { workshop: options.demoWorkshop === true });
+  await seedDemo(ds, { workshop: options.demoWorkshop === true, dataDir });
   const other = await ds.getRepository(Shop).save({ name: 'Copperfield Small Engines' });
   await ds.getRepository(User).save({
     shopId: other.id,

@@ -6,11 +6,14 @@ import { Diagnosis } from '../../diagnoses/diagnosis.entity';
 import { Job } from '../../jobs/job.entity';
 import { Machine } from '../../machines/machine.entity';
 import { Meter } from '../../meters/meter.entity';
+import { storePhoto } from '../../photos/photo-storage';
+import { DiagnosisPhoto } from '../../photos/photo.entity';
 import { ProcedureVersion } from '../../procedures/procedure-version.entity';
 import { Procedure } from '../../procedures/procedure.entity';
 import type { User } from '../../users/user.entity';
 import { DEMO_DIAGNOSES, replayDiagnosis } from './diagnoses';
 import { generateDemoDiagnoses } from './generate-diagnoses';
+import { meterPhotoPng } from './meter-photo';
 import { DEMO_JOBS } from './machines-and-jobs';
 import { DEMO_METERS } from './meters';
 import { DEMO_PROCEDURES } from './procedures';
@@ -22,7 +25,13 @@ import { addMinutes, daysBefore, resolveWhen } from './time';
  * diagnoses generated from invented faults (generate-diagnoses.ts). Everything is invented for the demo.
  * Runs inside the seed's transaction; a shop that already has procedures is left alone.
  */
-export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, users: Record<Role, User>, now: Date = new Date()): Promise<void> {
+export async function seedDemoWorkshop(
+  tx: EntityManager,
+  shop: { id: string },
+  users: Record<Role, User>,
+  options: { now?: Date; /** Where photo files go; without it no photos are seeded. */ dataDir?: string } = {},
+): Promise<void> {
+  const now = options.now ?? new Date();
   const shopId = shop.id;
   if (await tx.getRepository(Procedure).existsBy({ shopId })) return;
   const lead = users.lead;
@@ -97,6 +106,7 @@ export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, 
 
   const diagnosisRows: QueryDeepPartialEntity<Diagnosis>[] = [];
   const stepRows: QueryDeepPartialEntity<DiagnosisStep>[] = [];
+  const photoRows: QueryDeepPartialEntity<DiagnosisPhoto>[] = [];
   for (const d of [...DEMO_DIAGNOSES, ...generated.diagnoses]) {
     const version = d.version === undefined ? running.get(d.procedure)! : numbered.get(`${d.procedure}#${d.version}`)!;
     const meter = meters.get(d.meter)!;
@@ -123,9 +133,28 @@ export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, 
       startedAt,
       endedAt: d.conclusion ? addMinutes(startedAt, d.conclusion.atMin) : null,
     });
+    // A few generated diagnoses carry a photo of the meter on the reading that gave the fault away.
+    const decisive = replay.steps.filter((s) => s.retractedAtMin === null).at(-1);
+    const photographed = options.dataDir !== undefined && d.key.startsWith('generated-') && photoRows.length < PHOTOGRAPHED && decisive?.readingText ? decisive : null;
     for (const s of replay.steps) {
+      const stepId = crypto.randomUUID();
+      if (s === photographed) {
+        const shown = s.overRange ? 'OL' : s.readingText!.replace(',', '.').replace(/[^0-9.-]/g, '');
+        const bytes = meterPhotoPng(shown);
+        photoRows.push({
+          id: crypto.randomUUID(),
+          shopId,
+          diagnosisId,
+          stepId,
+          storageKey: await storePhoto(options.dataDir!, shopId, bytes, 'image/png'),
+          contentType: 'image/png',
+          size: bytes.length,
+          uploadedById: by.id,
+          createdAt: addMinutes(startedAt, s.atMin + 1),
+        });
+      }
       stepRows.push({
-        id: crypto.randomUUID(),
+        id: stepId,
         shopId,
         diagnosisId,
         seq: s.seq,
@@ -148,7 +177,11 @@ export async function seedDemoWorkshop(tx: EntityManager, shop: { id: string }, 
   }
   await insertInChunks(tx, Diagnosis, diagnosisRows);
   await insertInChunks(tx, DiagnosisStep, stepRows);
+  await insertInChunks(tx, DiagnosisPhoto, photoRows);
 }
+
+/** How many generated diagnoses get a photo. */
+const PHOTOGRAPHED = 3;
 
 /** SQLite limits the variables of one statement, so rows go in a few hundred at a time. */
 async function insertInChunks<T extends ObjectLiteral>(tx: EntityManager, entity: EntityTarget<T>, rows: QueryDeepPartialEntity<T>[]): Promise<void> {
