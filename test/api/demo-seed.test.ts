@@ -47,7 +47,7 @@ beforeAll(async () => {
   ds = await openDatabase(path.join(dir, 'demo.sqlite'));
   seededAt = new Date();
   expect(await seedDemo(ds, { dataDir: dir })).toBe(true);
-});
+}, 60_000);
 
 afterAll(async () => {
   await ds.destroy();
@@ -188,7 +188,7 @@ describe('the demo shop through the API', () => {
   let h: Harness;
   beforeAll(async () => {
     h = await createHarness({ demoWorkshop: true });
-  });
+  }, 60_000);
   afterAll(() => h.close());
 
   it('shows a technician the published procedures and an apprentice the concluded diagnoses', async () => {

@@ -48,7 +48,8 @@ beforeAll(async () => {
   tessa = await detail('Gethin Marlowe');
   fellrunner = await detail('Bram Visser');
   openId = all.find((d) => d.status === 'open')!.id;
-});
+  // Seeding the demo shop's sixty diagnoses and hashing six passwords takes seconds on a busy shared machine.
+}, 60_000);
 afterAll(() => h.close());
 
 describe('what an apprentice may read', () => {
