@@ -66,7 +66,7 @@ export const authRoutes: RouteDef[] = [
   {
     method: 'post',
     path: '/api/auth/reset-password',
-    summary: 'Set a new password with the token from a reset link; the link then stops working.',
+    summary: 'Set a new password with the token from a reset link; the link then stops working, and every session signed in before ends.',
     roles: 'public',
     limited: true,
     body: resetPasswordSchema,
@@ -82,7 +82,8 @@ export const authRoutes: RouteDef[] = [
           throw new ApiError(400, 'invalid_token', 'This reset link has expired or was already used. Ask for a new one.');
         }
         await tx.getRepository(PasswordReset).update({ userId: reset.userId, usedAt: IsNull() }, { usedAt: new Date() });
-        await tx.getRepository(User).update({ id: reset.userId }, { passwordHash });
+        // A new password ends every session signed in with the old one.
+        await tx.getRepository(User).update({ id: reset.userId }, { passwordHash, sessionEpoch: () => '"sessionEpoch" + 1' });
       });
       res.status(204).end();
     },

@@ -7,6 +7,8 @@ import { toSessionUser } from '../users/user-views';
 interface Claims {
   sub: string;
   shop: string;
+  /** The member's session epoch when the token was issued; a later epoch ends the session. */
+  ep: number;
 }
 
 /** What a valid session token says: the member, their shop, and when it expires (seconds since 1970). */
@@ -15,7 +17,7 @@ export interface SessionClaims extends Claims {
 }
 
 export function issueSession(ctx: AppContext, user: User & { shop: { name: string } }): SignInResponse {
-  const token = jwt.sign({ shop: user.shopId } satisfies Omit<Claims, 'sub'>, ctx.jwtKey, {
+  const token = jwt.sign({ shop: user.shopId, ep: user.sessionEpoch } satisfies Omit<Claims, 'sub'>, ctx.jwtKey, {
     subject: user.id,
     expiresIn: ctx.config.jwtTtl as jwt.SignOptions['expiresIn'],
     algorithm: 'HS256',
@@ -29,7 +31,10 @@ export function readSessionToken(ctx: AppContext, token: string): SessionClaims 
   try {
     const claims = jwt.verify(token, ctx.jwtKey, { algorithms: ['HS256'] });
     if (typeof claims !== 'object' || typeof claims.sub !== 'string' || typeof claims.shop !== 'string' || typeof claims.exp !== 'number') return null;
-    return { sub: claims.sub, shop: claims.shop, exp: claims.exp };
+    // Tokens issued before epochs existed belong to epoch 0, where every member started.
+    const ep = claims.ep ?? 0;
+    if (!Number.isInteger(ep)) return null;
+    return { sub: claims.sub, shop: claims.shop, ep, exp: claims.exp };
   } catch {
     return null;
   }

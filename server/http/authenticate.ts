@@ -17,6 +17,7 @@ interface MemberRow {
   name: string;
   role: Role;
   active: number;
+  sessionEpoch: number;
   createdAt: string;
   shopName: string;
 }
@@ -28,7 +29,7 @@ function memberLookup(ctx: AppContext): Database.Statement {
   const db = sqliteOf(ctx.ds);
   let stmt = lookups.get(db);
   if (!stmt) {
-    stmt = db.prepare('SELECT u.id, u.shopId, u.email, u.name, u.role, u.active, u.createdAt, s.name AS shopName FROM user u JOIN shop s ON s.id = u.shopId WHERE u.id = ?');
+    stmt = db.prepare('SELECT u.id, u.shopId, u.email, u.name, u.role, u.active, u.sessionEpoch, u.createdAt, s.name AS shopName FROM user u JOIN shop s ON s.id = u.shopId WHERE u.id = ?');
     lookups.set(db, stmt);
   }
   return stmt;
@@ -36,13 +37,14 @@ function memberLookup(ctx: AppContext): Database.Statement {
 
 function toUser(row: MemberRow): User {
   const shop = Object.assign(new Shop(), { id: row.shopId, name: row.shopName });
-  return Object.assign(new User(), { id: row.id, shopId: row.shopId, email: row.email, name: row.name, role: row.role, active: row.active === 1, createdAt: dateFromSql(row.createdAt), shop });
+  return Object.assign(new User(), { id: row.id, shopId: row.shopId, email: row.email, name: row.name, role: row.role, active: row.active === 1, sessionEpoch: row.sessionEpoch, createdAt: dateFromSql(row.createdAt), shop });
 }
 
 /**
  * Checks the bearer token (its signature once per token, see
  * verifySessionToken), then loads the member on every request so a role change
- * or a deactivation takes effect at once.
+ * or a deactivation takes effect at once, and a raised session epoch (a password
+ * reset, signing out everywhere) ends the older sessions.
  */
 export function authenticate(ctx: AppContext, roles: readonly Role[]): RequestHandler {
   return (req, _res, next) => {
@@ -52,7 +54,7 @@ export function authenticate(ctx: AppContext, roles: readonly Role[]): RequestHa
     const claims = verifySessionToken(ctx, match[1]);
     if (!claims) throw new ApiError(401, 'invalid_token', 'Your session has expired or is not valid. Sign in again.');
     const row = memberLookup(ctx).get(claims.sub) as MemberRow | undefined;
-    if (!row || row.shopId !== claims.shop) {
+    if (!row || row.shopId !== claims.shop || row.sessionEpoch !== claims.ep) {
       throw new ApiError(401, 'invalid_token', 'Your session is not valid any more. Sign in again.');
     }
     if (!row.active) throw new ApiError(401, 'deactivated', 'This account has been deactivated. Ask the shop owner.');

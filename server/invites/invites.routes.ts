@@ -130,7 +130,7 @@ export const inviteRoutes: RouteDef[] = [
           throw new ApiError(409, 'already_member', 'That e-mail address already has a Probepath account. Sign in instead.');
         }
         await tx.getRepository(Invite).update({ id: invite.id }, { acceptedAt: new Date() });
-        const saved = await tx.getRepository(User).save({ shopId: invite.shopId, email: invite.email, name, role: invite.role, active: true, passwordHash });
+        const saved = await tx.getRepository(User).save({ shopId: invite.shopId, email: invite.email, name, role: invite.role, active: true, passwordHash, sessionEpoch: 0 });
         const shop = await tx.getRepository(Shop).findOneByOrFail({ id: invite.shopId });
         return Object.assign(saved, { shop });
       });

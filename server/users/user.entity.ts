@@ -30,6 +30,13 @@ export class User {
   @Column('text')
   passwordHash: string;
 
+  /**
+   * Session tokens carry the epoch they were issued in; raising it (a password reset, "sign out
+   * everywhere") ends every session issued before.
+   */
+  @Column('integer', { default: 0 })
+  sessionEpoch: number;
+
   @CreateDateColumn({ type: 'datetime' })
   createdAt: Date;
 }

@@ -61,8 +61,10 @@ describe('invite through the mail fake', () => {
 });
 
 describe('password reset through the mail fake', () => {
-  it('mails a single-use link that sets a new password; the old one stops working', async () => {
+  it('mails a single-use link that sets a new password; the old one stops working, and so do sessions signed in before', async () => {
     const email = demoEmail('apprentice');
+    const before = (await request(h.app).post('/api/auth/sign-in').send({ email, password: DEMO_PASSWORD })).body.token as string;
+    expect((await request(h.app).get('/api/auth/me').set('authorization', `Bearer ${before}`)).status).toBe(200);
     expect((await request(h.app).post('/api/auth/forgot-password').send({ email })).status).toBe(202);
     const [mail] = await h.mailTo(email);
     expect(mail.subject).toBe('Reset your Probepath password');
@@ -70,7 +72,14 @@ describe('password reset through the mail fake', () => {
 
     expect((await request(h.app).post('/api/auth/reset-password').send({ token, password: 'a-brand-new-password' })).status).toBe(204);
     expect((await request(h.app).post('/api/auth/sign-in').send({ email, password: DEMO_PASSWORD })).status).toBe(401);
-    expect((await request(h.app).post('/api/auth/sign-in').send({ email, password: 'a-brand-new-password' })).status).toBe(200);
+    const after = await request(h.app).post('/api/auth/sign-in').send({ email, password: 'a-brand-new-password' });
+    expect(after.status).toBe(200);
+
+    // Someone who knew the old password is signed out everywhere; the new session works.
+    const stale = await request(h.app).get('/api/auth/me').set('authorization', `Bearer ${before}`);
+    expect(stale.status).toBe(401);
+    expect(stale.body.error.code).toBe('invalid_token');
+    expect((await request(h.app).get('/api/auth/me').set('authorization', `Bearer ${after.body.token}`)).status).toBe(200);
 
     const reuse = await request(h.app).post('/api/auth/reset-password').send({ token, password: 'yet-another-password' });
     expect(reuse.status).toBe(400);

@@ -14,8 +14,16 @@ describe('session tokens verified once per token', () => {
 
   it('answers the claims of a valid token, the same on a repeat', () => {
     const token = sign(ctx, exp);
-    expect(verifySessionToken(ctx, token, now)).toEqual({ sub: 'member-1', shop: 'shop-1', exp });
-    expect(verifySessionToken(ctx, token, now + 1000)).toEqual({ sub: 'member-1', shop: 'shop-1', exp });
+    expect(verifySessionToken(ctx, token, now)).toEqual({ sub: 'member-1', shop: 'shop-1', ep: 0, exp });
+    expect(verifySessionToken(ctx, token, now + 1000)).toEqual({ sub: 'member-1', shop: 'shop-1', ep: 0, exp });
+  });
+
+  it('reads the session epoch a token was issued in; a token from before epochs belongs to epoch 0; a malformed one is refused', () => {
+    const withEpoch = jwt.sign({ shop: 'shop-1', ep: 3, exp }, ctx.jwtKey, { subject: 'member-9', algorithm: 'HS256' });
+    expect(verifySessionToken(ctx, withEpoch, now)?.ep).toBe(3);
+    expect(verifySessionToken(ctx, sign(ctx, exp, 'member-10'), now)?.ep).toBe(0);
+    const malformed = jwt.sign({ shop: 'shop-1', ep: 'x', exp }, ctx.jwtKey, { subject: 'member-11', algorithm: 'HS256' });
+    expect(verifySessionToken(ctx, malformed, now)).toBeNull();
   });
 
   it('refuses a remembered token from the second of its expiry on, as jsonwebtoken does', () => {
