@@ -167,6 +167,34 @@ describe('an apprentice on a phone', () => {
   });
 });
 
+describe('an apprentice at a desk', () => {
+  it('sees the seeded photo of the meter on the step that decided a generated diagnosis', async () => {
+    const api = await apiAs(server.url, demo('apprentice').email, DEMO_PASSWORD);
+    let photographed: DiagnosisDetail | undefined;
+    for (const d of diagnoses) {
+      const { diagnosis } = await api<{ diagnosis: DiagnosisDetail }>(`/api/diagnoses/${d.id}`);
+      if (diagnosis.photos.length) {
+        photographed = diagnosis;
+        break;
+      }
+    }
+    const step = photographed!.steps.find((st) => st.id === photographed!.photos[0].stepId)!;
+    const { context, page } = await openPage(browser, server.url, 'desk');
+    await signIn(page, demo('apprentice').email, DEMO_PASSWORD, 'replays');
+    await page.goto(`/replays/${photographed!.id}`);
+    await page.getByTestId('replay-step-1').waitFor();
+    // End goes to the finding, ← back to the step that led to it.
+    await page.keyboard.press('End');
+    await page.getByTestId('replay-finding').waitFor();
+    await page.keyboard.press('ArrowLeft');
+    await page.getByTestId(`replay-step-${step.seq}`).waitFor();
+    await page.getByTestId('replay-photos').locator('img').waitFor({ state: 'attached' });
+    await page.getByTestId('replay-photos').scrollIntoViewIfNeeded();
+    await shot(page, 'desk', 'replay-seeded-photo');
+    await context.close();
+  });
+});
+
 describe('a technician with no practice yet', () => {
   it('sees the empty practice history, and a replay that is not there says so', async () => {
     const { context, page } = await openPage(browser, server.url, 'phone');
