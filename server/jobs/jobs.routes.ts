@@ -1,5 +1,7 @@
 import { jobSchema, type JobInput } from '@shared/workshop/schemas';
-import type { JobView } from '@shared/api/workshop-types';
+import type { JobListItem, JobView } from '@shared/api/workshop-types';
+import { dateFromSql } from '../db/sql-values';
+import { Diagnosis } from '../diagnoses/diagnosis.entity';
 import { ApiError, notFound } from '../http/api-error';
 import type { RouteDef } from '../http/route';
 import { answerOnce } from '../idempotency/with-idempotency';
@@ -24,11 +26,24 @@ export const jobRoutes: RouteDef[] = [
   {
     method: 'get',
     path: '/api/jobs',
-    summary: "The shop's jobs with their machines, newest first.",
+    summary: "The shop's jobs with their machines, newest first, each with when its latest concluded diagnosis ended (null while none has).",
     roles: RUNNERS,
     async handler(req, res, ctx) {
-      const jobs = await ctx.ds.getRepository(Job).find({ where: { shopId: req.member.shopId }, relations: { machine: true }, order: { createdAt: 'DESC' }, take: 500 });
-      res.json({ jobs: jobs.map(toJobView) });
+      const shopId = req.member.shopId;
+      const [jobs, concluded] = await Promise.all([
+        ctx.ds.getRepository(Job).find({ where: { shopId }, relations: { machine: true }, order: { createdAt: 'DESC' }, take: 500 }),
+        ctx.ds
+          .getRepository(Diagnosis)
+          .createQueryBuilder('d')
+          .select('d.jobId', 'jobId')
+          .addSelect('MAX(d.endedAt)', 'endedAt')
+          .where('d.shopId = :shopId AND d.status = :status', { shopId, status: 'concluded' })
+          .groupBy('d.jobId')
+          .getRawMany<{ jobId: string; endedAt: string }>(),
+      ]);
+      const endedAt = new Map(concluded.map((c) => [c.jobId, dateFromSql(c.endedAt).toISOString()]));
+      const list: JobListItem[] = jobs.map((j) => ({ ...toJobView(j), concludedAt: endedAt.get(j.id) ?? null }));
+      res.json({ jobs: list });
     },
   },
   {

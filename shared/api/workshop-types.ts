@@ -25,6 +25,12 @@ export interface JobView {
   createdAt: string;
 }
 
+/** A job as the bench's job list shows it. */
+export interface JobListItem extends JobView {
+  /** When the job's latest concluded diagnosis ended; null while none has concluded. */
+  concludedAt: string | null;
+}
+
 export interface MeterView {
   id: string;
   name: string;

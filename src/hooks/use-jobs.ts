@@ -1,14 +1,14 @@
 import useSWR from 'swr';
 import useSWRMutation from 'swr/mutation';
-import type { JobView } from '@shared/api/workshop-types';
+import type { JobListItem, JobView } from '@shared/api/workshop-types';
 import type { JobInput } from '@shared/workshop/schemas';
 import { api, type ApiError } from '@/lib/api';
 
 const KEY = '/api/jobs';
 
-/** The shop's jobs with their machines, newest first. */
+/** The shop's jobs with their machines, newest first, each saying when it was last diagnosed to a finding. */
 export function useJobs() {
-  return useSWR<{ jobs: JobView[] }, ApiError>(KEY);
+  return useSWR<{ jobs: JobListItem[] }, ApiError>(KEY);
 }
 
 export function useCreateJob() {

@@ -209,6 +209,22 @@ describe('the demo shop through the API', () => {
     expect(photo.headers['content-type']).toBe('image/png');
   });
 
+  it('lists each job with when its latest concluded diagnosis ended, and null for a job still waiting', async () => {
+    const tech = await h.tokenFor('tech');
+    const res = await request(h.app).get('/api/jobs').set('authorization', `Bearer ${tech}`);
+    expect(res.status).toBe(200);
+    const { jobs } = res.body as { jobs: { id: string; concludedAt: string | null }[] };
+    const diagnoses = await h.runtime.ctx.ds.getRepository(Diagnosis).find({ where: { status: 'concluded' } });
+    const latest = new Map<string, number>();
+    for (const d of diagnoses) latest.set(d.jobId, Math.max(latest.get(d.jobId) ?? 0, d.endedAt!.getTime()));
+    expect(jobs.filter((j) => j.concludedAt).length).toBe(latest.size);
+    for (const j of jobs) expect(j.concludedAt ? Date.parse(j.concludedAt) : null, j.id).toBe(latest.get(j.id) ?? null);
+    // The open diagnosis's job has no finding yet.
+    const open = await request(h.app).get('/api/diagnoses?status=open').set('authorization', `Bearer ${tech}`);
+    const openJob = (await h.runtime.ctx.ds.getRepository(Diagnosis).findOneByOrFail({ id: open.body.diagnoses[0].id })).jobId;
+    expect(jobs.find((j) => j.id === openJob)?.concludedAt).toBeNull();
+  });
+
   it('lets the technician carry on with the open diagnosis', async () => {
     const tech = await h.tokenFor('tech');
     const open = await request(h.app).get('/api/diagnoses?status=open').set('authorization', `Bearer ${tech}`);

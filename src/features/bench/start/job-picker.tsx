@@ -1,18 +1,23 @@
 import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import type { JobView } from '@shared/api/workshop-types';
+import type { JobListItem, JobView } from '@shared/api/workshop-types';
 import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
 import { SearchField } from '@/components/ui/search-field';
 import { Text } from '@/components/ui/text';
 import { useJobs } from '@/hooks/use-jobs';
+import { formatDate } from '@/lib/format';
 import { radius, space, useTheme } from '@/lib/theme';
 import { machineName } from './machine-name';
 
 const SHOWN = 12;
 
-/** Step 1: the job on the bench, found by customer, machine, work order or complaint; or a new one. */
+/**
+ * Step 1: the job on the bench, found by customer, machine, work order or complaint; or a new one. Jobs
+ * still waiting for a finding come first; those already diagnosed say when, and stay pickable (a comeback,
+ * a second fault).
+ */
 export function JobPicker({ onPick, onNew }: { onPick: (job: JobView) => void; onNew: () => void }) {
   const colors = useTheme();
   const jobs = useJobs();
@@ -21,7 +26,7 @@ export function JobPicker({ onPick, onNew }: { onPick: (job: JobView) => void; o
     const words = filter.toLowerCase().split(/\s+/).filter(Boolean);
     const all = jobs.data?.jobs ?? [];
     const matching = words.length ? all.filter((j) => words.every((w) => haystack(j).includes(w))) : all;
-    return matching.slice(0, SHOWN);
+    return waitingFirst(matching).slice(0, SHOWN);
   }, [jobs.data, filter]);
 
   if (jobs.error) return <ErrorState title="Can't load the jobs" error={jobs.error} onRetry={() => void jobs.mutate()} />;
@@ -38,7 +43,7 @@ export function JobPicker({ onPick, onNew }: { onPick: (job: JobView) => void; o
               testID={`start-job-${j.id}`}
               variant="row"
               label={`${j.customerName} · ${machineName(j.machine)}`}
-              description={`${j.reference ? `${j.reference} · ` : ''}“${j.complaint}”`}
+              description={`${j.reference ? `${j.reference} · ` : ''}“${j.complaint}”${j.concludedAt ? ` · diagnosed ${formatDate(j.concludedAt)}` : ''}`}
               onPress={() => onPick(j)}
             />
           </View>
@@ -51,6 +56,11 @@ export function JobPicker({ onPick, onNew }: { onPick: (job: JobView) => void; o
       </View>
     </View>
   );
+}
+
+/** Jobs without a concluded diagnosis first, each group keeping the server's newest-first order. */
+function waitingFirst(jobs: JobListItem[]): JobListItem[] {
+  return [...jobs.filter((j) => !j.concludedAt), ...jobs.filter((j) => j.concludedAt)];
 }
 
 function haystack(j: JobView): string {
