@@ -2,6 +2,8 @@ import fs from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DiagnosisDetail, DiagnosisSummary } from '@shared/api/diagnosis-types';
+import type { MeasureCheck } from '@shared/engine/procedure';
+import { explainEvaluation } from '@shared/engine/explain';
 import { practiceQuestions } from '@shared/practice/questions';
 import { PNG } from '../support/photos';
 import { apiAs, DEMO_PASSWORD, demo, launchBrowser, openPage, type RunningServer, shot, signIn, SIZES, type Size, startServer } from './support';
@@ -102,6 +104,10 @@ describe('an apprentice on a phone', () => {
         if (wrong) await shot(page, 'phone', 'practice-wrong-answer', page.getByTestId('practice-result'));
         if (question.asked === 'verdict') {
           await page.getByTestId('replay-verdict').waitFor();
+          // The reasons are given once, in the verdict panel, not again in the result.
+          const check = tessa.document.checks.find((c) => c.id === step.checkId) as MeasureCheck;
+          const reasons = explainEvaluation(check.spec, step.evaluation!, check.quantity);
+          expect(await page.getByText(reasons, { exact: true }).count()).toBe(1);
           if (i === 4) await shot(page, 'phone', 'practice-verdict-revealed', page.getByTestId('replay-spec-bar'));
         }
       }

@@ -103,7 +103,8 @@ function Outcome({ result }: { result: PracticeResult }) {
         </Text>
       </View>
       {right ? null : <Text variant="bodyStrong">{`The answer was: ${result.expectedLabel}.`}</Text>}
-      <Text>{result.explanation}</Text>
+      {/* A verdict's reasons follow in the verdict panel under the reading; a next check's are said here. */}
+      {result.attempt.asked === 'verdict' ? null : <Text>{result.explanation}</Text>}
     </View>
   );
 }
