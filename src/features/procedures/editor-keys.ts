@@ -1,3 +1,5 @@
+import type { KeyPress } from '@/lib/shortcut-keys';
+
 /** The editor's keyboard shortcuts: one list for the key handling and for the "Keys" help the diagram shows. */
 
 export type EditorKey = 'undo' | 'redo' | 'zoomIn' | 'zoomOut' | 'fit' | 'up' | 'down' | 'left' | 'right' | 'delete';
@@ -13,14 +15,6 @@ export const SHORTCUTS: readonly { key: EditorKey; keys: string; does: string }[
   { key: 'left', keys: '← →', does: 'Select the previous or next check of the same parent' },
   { key: 'delete', keys: 'Delete', does: 'Delete the selected check (asks first)' },
 ];
-
-interface KeyPress {
-  key: string;
-  ctrlKey: boolean;
-  metaKey: boolean;
-  shiftKey: boolean;
-  altKey: boolean;
-}
 
 const ARROWS: Record<string, EditorKey> = { ArrowUp: 'up', ArrowDown: 'down', ArrowLeft: 'left', ArrowRight: 'right' };
 

@@ -21,7 +21,8 @@ import { ProcedureDiagram } from '@/features/procedures/components/procedure-dia
 import { VersionCompareLoader, type VersionPick } from '@/features/procedures/components/version-compare';
 import { VersionsPanel } from '@/features/procedures/components/versions-panel';
 import { useDraftEditor } from '@/features/procedures/use-draft-editor';
-import { useEditorKeys } from '@/features/procedures/use-editor-keys';
+import { keyOf } from '@/features/procedures/editor-keys';
+import { useShortcutKeys } from '@/lib/use-shortcut-keys';
 import { useDraft, useProcedure } from '@/hooks/use-procedures';
 import { api, ApiError } from '@/lib/api';
 import { radius, space, type, useBreakpoints, useTheme } from '@/lib/theme';
@@ -152,7 +153,7 @@ function Editor({ procedureId, title, loaded, onCopied, onBack, onDraftStarted }
     setSelectedId(null);
     setConfirmDelete(false);
   };
-  useEditorKeys({
+  useShortcutKeys(keyOf, {
     undo: editor.undo,
     redo: editor.redo,
     up: () => move('up'),

@@ -18,8 +18,8 @@ import { ReplayHeader } from '@/features/replays/components/replay-header';
 import { StepComments } from '@/features/replays/components/step-comments';
 import { StepPanel } from '@/features/replays/components/step-panel';
 import { earlierReadings, replayPath, stepDurations } from '@/features/replays/replay-path';
-import { STEP_KEYS } from '@/features/replays/step-keys';
-import { useStepKeys } from '@/features/replays/use-step-keys';
+import { STEP_KEYS, stepKeyOf } from '@/features/replays/step-keys';
+import { useShortcutKeys } from '@/lib/use-shortcut-keys';
 import { useAnswerPractice } from '@/hooks/use-practice';
 import { useReplay, useStepComments } from '@/hooks/use-replays';
 import { layoutProcedure } from '@/lib/procedure-layout';
@@ -174,7 +174,7 @@ function ReplayViewer({ diagnosis, comments, practice, onMode }: ViewerProps) {
 
   // Keys do what the buttons do, and no more: Next waits for an answer, End does not skip practice questions.
   const canNext = !atEnd && revealed;
-  useStepKeys({
+  useShortcutKeys(stepKeyOf, {
     previous: () => index > 0 && go(index - 1),
     next: () => canNext && go(index + 1),
     first: () => index > 0 && go(0),

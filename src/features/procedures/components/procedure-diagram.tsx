@@ -6,8 +6,8 @@ import { centreOn, fitToView, type Viewport, wheelFactor, zoomAt, zoomBy } from 
 import { DiagramDrawing, type NodeMarks } from '@/components/diagram/diagram-drawing';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
-import { SHORTCUTS } from '@/features/procedures/editor-keys';
-import { useEditorKeys } from '@/features/procedures/use-editor-keys';
+import { keyOf, SHORTCUTS } from '@/features/procedures/editor-keys';
+import { useShortcutKeys } from '@/lib/use-shortcut-keys';
 import { useWheelZoom } from '@/features/procedures/use-wheel-zoom';
 import { type DiagramNode, layoutProcedure, LEGIBLE_SCALE } from '@/lib/procedure-layout';
 import { type Palette, radius, space, useTheme } from '@/lib/theme';
@@ -69,7 +69,7 @@ export function ProcedureDiagram({ document, selectedId, flagged, onSelect, mark
   useWheelZoom(canvas, (deltaY, point) => setView(zoomAt(shownRef.current, wheelFactor(deltaY), point)));
   const zoomIn = () => setView(zoomBy(shownRef.current, 1, pane));
   const zoomOut = () => setView(zoomBy(shownRef.current, -1, pane));
-  useEditorKeys(shortcuts ? { zoomIn, zoomOut, fit: () => setView(null) } : {});
+  useShortcutKeys(keyOf, shortcuts ? { zoomIn, zoomOut, fit: () => setView(null) } : {});
   const selected = layout.nodes.find((n) => n.id === selectedId);
 
   const nodeMarks = useCallback(
