@@ -55,7 +55,8 @@ export function Button({
     <Pressable
       testID={testID}
       role="button"
-      aria-label={ariaLabel ?? label}
+      // Named by what it shows (label and description), unless the label is hidden or a fuller name is given.
+      aria-label={ariaLabel ?? (hideLabel ? label : undefined)}
       aria-disabled={inactive}
       aria-busy={loading}
       aria-current={isNavigation && selected ? 'page' : undefined}
