@@ -14,7 +14,9 @@ export function useShortcutKeys<K extends string>(resolve: KeyResolver<K>, bindi
     const listener = (event: KeyboardEvent) => {
       const target = event.target instanceof HTMLElement ? event.target : null;
       if (target && (FIELDS.has(target.tagName) || target.isContentEditable)) return;
-      const key = current.current.resolve(event, { scrollsSideways: target !== null && target.scrollWidth > target.clientWidth });
+      // With nothing focused the target is the page itself, which is not an area that keeps its arrows.
+      const area = target && target !== document.body && target !== document.documentElement ? target : null;
+      const key = current.current.resolve(event, { scrollsSideways: area !== null && area.scrollWidth > area.clientWidth });
       const action = key ? current.current.bindings[key] : undefined;
       if (!action) return;
       event.preventDefault();
