@@ -15,6 +15,7 @@ import { space } from '@/lib/theme';
 import { BackButton } from './back-button';
 import { CheckDetails } from './check-details';
 import { StepFrame } from './step-frame';
+import { StepsWaiting } from './steps-waiting';
 import type { StepProps } from './step-props';
 
 /** The path reached a finding: the faulty part and the action, then parts, labour and a closing note to conclude. */
@@ -60,11 +61,7 @@ export function FindingStep({ detail, local, check, number, onBack, status, foot
             </Text>
             <Text>{check.finding.action}</Text>
           </Card>
-          {waiting > 0 ? (
-            <Text testID="conclude-waiting" tone="textMuted">
-              {waiting === 1 ? 'One step is' : `${waiting} steps are`} still waiting to be sent. The diagnosis can be concluded once the server has the whole path.
-            </Text>
-          ) : null}
+          <StepsWaiting count={waiting} closing="concluded" testID="conclude-waiting" />
           <FormError message={formStatus} />
           <View style={styles.fields}>
             <TextField name="parts" label="Parts used" hint="Optional, e.g. pulse coil, connector pigtail" testID="conclude-parts" />

@@ -10,6 +10,7 @@ import { TextField } from '@/components/ui/text-field';
 import { DIAGNOSIS_LISTS, useAbandonDiagnosis } from '@/hooks/use-diagnosis';
 import { showServerError } from '@/lib/form-errors';
 import { useRequestKey } from '@/lib/idempotency-key';
+import { StepsWaiting } from './steps-waiting';
 import { space } from '@/lib/theme';
 
 /**
@@ -48,11 +49,7 @@ export function StopDiagnosis({ diagnosisId, waiting }: { diagnosisId: string; w
           <Text tone="textMuted">
             It closes without a finding and takes no more steps. The steps recorded so far stay in the shop&apos;s records and on the report.
           </Text>
-          {waiting > 0 ? (
-            <Text testID="stop-waiting" tone="textMuted">
-              {waiting === 1 ? 'One step is' : `${waiting} steps are`} still waiting to be sent. The diagnosis can be stopped once the server has the whole path.
-            </Text>
-          ) : null}
+          <StepsWaiting count={waiting} closing="stopped" testID="stop-waiting" />
           <FormError message={status} />
           <TextField name="reason" label="Why it stops here" hint="e.g. customer collected the machine; waiting for a part" testID="stop-reason" multiline />
           <View style={styles.actions}>
