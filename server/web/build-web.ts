@@ -4,6 +4,8 @@ import path from 'node:path';
 
 const SOURCES = ['app', 'src', 'shared', 'fonts', 'app.json', 'package.json', 'metro.config.js'];
 const LOCK_STALE_MS = 10 * 60 * 1000;
+/** How long a replaced bundle stays for pages opened before the new build (they may still load its chunks). */
+export const OLD_BUNDLE_GRACE_MS = 24 * 60 * 60 * 1000;
 
 function newestMtime(p: string): number {
   if (!fs.existsSync(p)) return 0;
@@ -42,10 +44,36 @@ function withBuildLock(root: string, work: () => void) {
   }
 }
 
+function filesUnder(dir: string, base = dir): string[] {
+  if (!fs.existsSync(dir)) return [];
+  return fs.readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
+    const full = path.join(dir, e.name);
+    return e.isDirectory() ? filesUnder(full, base) : [path.relative(base, full)];
+  });
+}
+
+/**
+ * Removes the hashed scripts of earlier builds from dist/_expo: those the newest build does not have and
+ * that have not been written for `graceMs`. Younger ones stay, so a page opened before the new build can
+ * still load its chunks. Returns the paths removed, relative to dist/.
+ */
+export function pruneOldBundles(dist: string, newest: ReadonlySet<string>, now = Date.now(), graceMs = OLD_BUNDLE_GRACE_MS): string[] {
+  const removed: string[] = [];
+  for (const rel of filesUnder(path.join(dist, '_expo')).map((f) => path.join('_expo', f))) {
+    if (newest.has(rel)) continue;
+    const file = path.join(dist, rel);
+    if (now - fs.statSync(file).mtimeMs < graceMs) continue;
+    fs.rmSync(file);
+    removed.push(rel);
+  }
+  return removed;
+}
+
 /**
  * Runs `expo export --platform web` when dist/ is missing or stale. It exports
- * to a side folder and then copies bundles and assets before index.html, never
- * deleting the old hashed files, so a server already serving dist/ keeps working.
+ * to a side folder and then copies bundles and assets before index.html, so a
+ * server already serving dist/ keeps working; earlier builds' scripts go once
+ * they are a day old (pruneOldBundles).
  */
 export function ensureWebBuild(root: string, log: (msg: string) => void): void {
   if (!webBuildIsStale(root)) return;
@@ -67,6 +95,8 @@ export function ensureWebBuild(root: string, log: (msg: string) => void): void {
     fs.mkdirSync(dist, { recursive: true });
     const entries = fs.readdirSync(out).sort((a, b) => Number(a === 'index.html') - Number(b === 'index.html'));
     for (const entry of entries) fs.cpSync(path.join(out, entry), path.join(dist, entry), { recursive: true, force: true });
+    const removed = pruneOldBundles(dist, new Set(filesUnder(out)));
+    if (removed.length) log(`Removed ${removed.length} script files of web builds over a day old.`);
     fs.rmSync(out, { recursive: true, force: true });
   });
 }
