@@ -316,6 +316,14 @@ describe('a lead reading the insight at a desk', () => {
     expect(await text(page, 'insight-count')).toContain(String(onDrain.length));
     expect(await text(page, 'insight-findings')).toContain('USB socket drains the battery');
     expect(await page.getByTestId('procedure-diagram').count()).toBe(1);
+    // With no step to follow, the close-up opens on the start check, across the middle of the pane.
+    const pane = (await page.getByTestId('procedure-diagram').boundingBox())!;
+    await expect
+      .poll(async () => {
+        const start = (await page.getByTestId('procedure-diagram').getByText('Battery rested', { exact: false }).first().boundingBox())!;
+        return Math.abs(start.x + start.width / 2 - (pane.x + pane.width / 2)) < pane.width / 4;
+      })
+      .toBe(true);
     await shot(page, 'desk', 'insight');
     await shot(page, 'desk', 'insight-diagram', page.getByTestId('procedure-diagram'));
     expect(await seriousViolations(page)).toEqual([]);

@@ -29,7 +29,7 @@ const CLOSE_UP = LEGIBLE_SCALE;
 /**
  * The procedure as a picture: checks as shapes by kind, outcomes as labelled arrows, the path taken drawn
  * thick, detours dashed, and the current check outlined and tagged. Too big for a pane at a readable size,
- * so it scrolls both ways and follows the current check.
+ * so it scrolls both ways and follows the current check (or opens on the start when there is none).
  */
 export function ProcedureDiagram({ layout, path, currentId, currentTag, height, summary, counts }: ProcedureDiagramProps) {
   const c = useTheme();
@@ -39,17 +39,19 @@ export function ProcedureDiagram({ layout, path, currentId, currentTag, height, 
   const [viewportHeight, setViewportHeight] = useState(height ?? 0);
   const [whole, setWhole] = useState(false);
   const current = layout.nodes.find((n) => n.id === currentId) ?? null;
+  // Where the close-up looks: the current check, or the start when there is none (insight).
+  const focus = current ?? layout.nodes.find((n) => n.id === layout.startId) ?? null;
   const scale = whole && viewportWidth > 0 ? Math.min(CLOSE_UP, viewportWidth / layout.width) : CLOSE_UP;
 
   // Glide from step to step, but jump straight there when the diagram first appears or changes size.
   const placed = useRef(false);
   useEffect(() => {
-    if (!current || viewportWidth === 0) return;
+    if (!focus || viewportWidth === 0) return;
     const animated = placed.current && !whole;
-    inner.current?.scrollTo({ x: Math.max(0, current.x * scale - viewportWidth / 2), animated });
-    outer.current?.scrollTo({ y: Math.max(0, current.y * scale - viewportHeight / 2), animated });
+    inner.current?.scrollTo({ x: Math.max(0, focus.x * scale - viewportWidth / 2), animated });
+    outer.current?.scrollTo({ y: Math.max(0, focus.y * scale - viewportHeight / 2), animated });
     placed.current = true;
-  }, [current, viewportWidth, viewportHeight, scale, whole]);
+  }, [focus, viewportWidth, viewportHeight, scale, whole]);
 
   const nodeMarks = useCallback(
     (n: DiagramNode): NodeMarks => ({
