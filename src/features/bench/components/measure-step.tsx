@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { StyleSheet, TextInput, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { decideStep } from '@shared/diagnosis/decide-step';
 import { pathSoFar } from '@shared/diagnosis/path-so-far';
 import { checkUncertainty, windowOnly } from '@shared/diagnosis/spec-bar-geometry';
@@ -8,12 +8,13 @@ import { explainEvaluation } from '@shared/engine/explain';
 import type { MeasureCheck } from '@shared/engine/procedure';
 import { referencedCheckId } from '@shared/engine/spec';
 import { specInWords } from '@shared/report/spec-words';
+import { ReadingField } from '@/components/reading/reading-field';
 import { SpecBar } from '@/components/spec-bar/spec-bar';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { Text } from '@/components/ui/text';
 import { VerdictChip, VerdictLine, VerdictPanel } from '@/components/verdict/verdict-mark';
-import { radius, space, type, useTheme } from '@/lib/theme';
+import { radius, space, useTheme } from '@/lib/theme';
 import { BackButton } from './back-button';
 import { CheckDetails } from './check-details';
 import { NoteField } from './note-field';
@@ -30,7 +31,6 @@ export function MeasureStep({ detail, local, check, number, onRecord, onBack, st
   const [text, setText] = useState('');
   const [unit, setUnit] = useState(UNIT_CHIPS[check.quantity][0]);
   const [note, setNote] = useState('');
-  const [focused, setFocused] = useState(false);
 
   const path = useMemo(() => pathSoFar(local.steps), [local.steps]);
   const readings = useMemo(() => {
@@ -106,25 +106,7 @@ export function MeasureStep({ detail, local, check, number, onRecord, onBack, st
       ) : null}
 
       <View style={styles.entry}>
-        <Text nativeID="reading-label" variant="bodyStrong">
-          Reading, as the meter shows it
-        </Text>
-        <TextInput
-          testID="reading-input"
-          aria-labelledby="reading-label"
-          value={text}
-          onChangeText={setText}
-          inputMode="decimal"
-          autoCorrect={false}
-          autoCapitalize="none"
-          maxLength={40}
-          placeholder={check.quantity === 'temperature' ? '21' : '0.00'}
-          placeholderTextColor={colors.textMuted}
-          onFocus={() => setFocused(true)}
-          onBlur={() => setFocused(false)}
-          onSubmitEditing={record}
-          style={[styles.reading, type.reading, { color: colors.text, backgroundColor: colors.surface, borderColor: focused ? colors.primary : colors.borderStrong, borderWidth: focused ? 3 : 2 }]}
-        />
+        <ReadingField testID="reading-input" value={text} onChange={setText} onSubmit={record} placeholder={check.quantity === 'temperature' ? '21' : '0.00'} />
         <View style={styles.chips} role="group" aria-label="Unit">
           {UNIT_CHIPS[check.quantity].map((u) => (
             <Button key={u} testID={`unit-${u}`} label={u} ariaLabel={`${u} (unit)`} selected={!ownUnit && unit === u} onPress={() => {
@@ -161,7 +143,6 @@ const styles = StyleSheet.create({
   pairedRow: { flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap' },
   pairedValue: { fontSize: 24, lineHeight: 30 },
   entry: { gap: space.sm },
-  reading: { minHeight: 72, borderRadius: radius.md, paddingHorizontal: space.md },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   chip: { minWidth: 64, minHeight: 48 },
 });

@@ -1,5 +1,5 @@
 import { useEffect, useMemo, useState } from 'react';
-import { StyleSheet, TextInput, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { checkUncertainty, windowOnly } from '@shared/diagnosis/spec-bar-geometry';
 import { VERDICT_WORDS } from '@shared/diagnosis/verdict-words';
 import { PREVIEW_AMBIENT_C, PREVIEW_METER, previewStep, type PreviewStep } from '@shared/editor/preview';
@@ -8,13 +8,14 @@ import { explainEvaluation } from '@shared/engine/explain';
 import type { Check, MeasureCheck, ProcedureDocument } from '@shared/engine/procedure';
 import { QUANTITY_INFO } from '@shared/engine/quantity';
 import { specInWords } from '@shared/report/spec-words';
+import { ReadingField } from '@/components/reading/reading-field';
 import { SpecBar } from '@/components/spec-bar/spec-bar';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { Heading, Text } from '@/components/ui/text';
 import { VerdictChip, VerdictPanel } from '@/components/verdict/verdict-mark';
 import { CheckPictures } from '@/features/procedures/components/check-pictures';
-import { radius, space, type, useTheme } from '@/lib/theme';
+import { radius, space, useTheme } from '@/lib/theme';
 
 /**
  * Walks the draft as a technician would: one check at a time, readings typed as the meter shows them and
@@ -169,23 +170,7 @@ function MeasureInput({ document, check, steps, titleOf, onRecord }: { document:
         Spec: <Text testID="preview-spec-words">{specInWords(check.spec, check.quantity, evaluation)}</Text>
       </Text>
       <SpecBar spec={check.spec} quantity={check.quantity} evaluation={evaluation} uncertaintyAt={uncertaintyAt} testID="preview-spec-bar" />
-      <Text nativeID="preview-reading-label" variant="bodyStrong">
-        Reading, as the meter shows it
-      </Text>
-      <TextInput
-        testID="preview-reading"
-        aria-labelledby="preview-reading-label"
-        value={text}
-        onChangeText={setText}
-        inputMode="decimal"
-        autoCorrect={false}
-        autoCapitalize="none"
-        maxLength={40}
-        placeholder={QUANTITY_INFO[check.quantity].example.split(/,| or /)[0]}
-        placeholderTextColor={colors.textMuted}
-        onSubmitEditing={() => judged && onRecord(text)}
-        style={[styles.reading, type.reading, { color: colors.text, borderColor: colors.borderStrong, backgroundColor: colors.surface }]}
-      />
+      <ReadingField testID="preview-reading" value={text} onChange={setText} onSubmit={() => judged && onRecord(text)} placeholder={QUANTITY_INFO[check.quantity].example.split(/,| or /)[0]} />
       {judged?.verdict && judged.evaluation ? (
         <VerdictPanel testID="preview-verdict" verdict={judged.verdict} explanation={explainEvaluation(check.spec, judged.evaluation, check.quantity)} next={next ? `Next: ${next}` : undefined} />
       ) : null}
@@ -215,5 +200,4 @@ const styles = StyleSheet.create({
   choice: { minHeight: 56, justifyContent: 'flex-start' },
   finding: { gap: space.xs },
   measure: { gap: space.sm },
-  reading: { minHeight: 72, borderWidth: 2, borderRadius: radius.md, paddingHorizontal: space.md },
 });
